@@ -1,0 +1,19 @@
+/** `npm run bench -- <name>`: benchmarks print figures; they are not tests and never fail on speed. */
+const benches: Record<string, () => Promise<{ run: (argv: string[]) => Promise<void> }>> = {
+  evaluate: () => import('./evaluate.ts'),
+  sweep: () => import('./sweep.ts'),
+  results: () => import('./results.ts'),
+  load: () => import('./load.ts'),
+};
+
+const [name, ...rest] = process.argv.slice(2);
+const names = name ? [name] : Object.keys(benches);
+for (const n of names) {
+  const load = benches[n];
+  if (!load) {
+    process.stderr.write(`unknown bench "${n}"; choose one of ${Object.keys(benches).join(', ')}\n`);
+    process.exit(2);
+  }
+  process.stdout.write(`\n# bench ${n}\n`);
+  await (await load()).run(rest);
+}

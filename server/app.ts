@@ -1,0 +1,48 @@
+/**
+ * createApp builds the Express app from its dependencies and never listens, so supertest can drive it.
+ * server/index.ts owns the process: database, listen, shutdown.
+ */
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import type { AppContext } from './context.ts';
+import { errorHandler } from './middleware/error-handler.ts';
+import { apiRouter } from './routes/index.ts';
+
+export interface AppOptions {
+  /** Folder of the built client to serve with an index.html fallback; omitted in API-only tests. */
+  clientDir?: string;
+}
+
+export function createApp(ctx: AppContext, options: AppOptions = {}): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  if (ctx.config.TRUST_PROXY) app.set('trust proxy', 1);
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          // ant-design-vue and AG Grid set inline styles; scripts stay same-origin only.
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'worker-src': ["'self'", 'blob:'],
+          'upgrade-insecure-requests': null,
+        },
+      },
+    }),
+  );
+  app.use(pinoHttp({ logger: ctx.log, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use(express.json({ limit: ctx.config.BODY_LIMIT }));
+  app.use('/api', apiRouter(ctx));
+
+  const clientDir = options.clientDir;
+  if (clientDir && existsSync(path.join(clientDir, 'index.html'))) {
+    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+    // History-mode routes: every non-API GET gets the client, which shows its own 404 page.
+    app.get(/^(?!\/api\/).*/, (_req, res) => res.sendFile(path.join(clientDir, 'index.html')));
+  }
+  app.use(errorHandler(ctx.log));
+  return app;
+}

@@ -1,0 +1,53 @@
+/**
+ * Owns a server process: config, database (with our own PostgreSQL unless DATABASE_URL is set),
+ * migrations, demo seed, listen, and an orderly shutdown that stops what it started.
+ */
+import type { Server } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import { createApp } from './app.ts';
+import { loadConfig, type Config } from './config.ts';
+import type { AppContext } from './context.ts';
+import { openDatabase, type Database } from './db/database.ts';
+import { createLogger } from './logger.ts';
+import { seedDemo } from './seed/index.ts';
+
+export interface RunningServer {
+  url: string;
+  ctx: AppContext;
+  database: Database;
+  close(): Promise<void>;
+}
+
+export async function startServer(
+  config: Config = loadConfig(),
+  options: { clientDir?: string } = {},
+): Promise<RunningServer> {
+  const log = createLogger(config);
+  const database = await openDatabase(config, (m) => log.info(m));
+  const ctx: AppContext = { config, db: database.db, log };
+  try {
+    if (config.SEED_DEMO) await seedDemo(ctx);
+  } catch (err) {
+    await database.close();
+    throw err;
+  }
+  const app = createApp(ctx, { clientDir: options.clientDir });
+  const server: Server = await new Promise((resolve, reject) => {
+    const s = app.listen(config.PORT, config.HOST, () => resolve(s));
+    s.once('error', reject);
+  });
+  const { port } = server.address() as AddressInfo;
+  const url = `http://${config.HOST}:${port}`;
+
+  let closing: Promise<void> | undefined;
+  const close = () =>
+    (closing ??= (async () => {
+      await new Promise<void>((resolve) => {
+        server.close(() => resolve());
+        // Server-sent event streams never end on their own.
+        server.closeAllConnections();
+      });
+      await database.close();
+    })());
+  return { url, ctx, database, close };
+}

@@ -1,0 +1,37 @@
+import type { RequestHandler } from 'express';
+import type { z } from 'zod';
+import { issueFields } from '../../shared/schemas/format-issue.ts';
+import { invalidInput } from '../errors.ts';
+
+interface Schemas {
+  body?: z.ZodType;
+  query?: z.ZodType;
+  params?: z.ZodType;
+}
+
+/**
+ * Parses body, query and params with the shared zod schemas and replaces them with the parsed values.
+ * Fails with one 400 listing every issue; `message` names the first as "field: rule".
+ */
+export function validate(schemas: Schemas): RequestHandler {
+  return (req, _res, next) => {
+    const fields = [];
+    for (const part of ['params', 'query', 'body'] as const) {
+      const schema = schemas[part];
+      if (!schema) continue;
+      const value = part === 'body' && req.body === undefined ? {} : req[part];
+      const parsed = schema.safeParse(value);
+      if (!parsed.success) {
+        const prefix = part === 'body' ? '' : `${part}.`;
+        fields.push(...issueFields(parsed.error).map((f) => ({ ...f, field: `${prefix}${f.field}` })));
+      } else if (part === 'body') {
+        req.body = parsed.data;
+      } else {
+        // Express 5 exposes query and params through getters; shadow them with the parsed values.
+        Object.defineProperty(req, part, { value: parsed.data, writable: true, configurable: true });
+      }
+    }
+    if (fields.length > 0) return next(invalidInput(fields));
+    next();
+  };
+}

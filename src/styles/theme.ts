@@ -1,0 +1,33 @@
+/** Lobewise's own look: deep slate-teal ink, a warm amber accent, Work Sans throughout. */
+import type { ThemeConfig } from 'ant-design-vue/es/config-provider/context';
+
+export const palette = {
+  ink: '#123f45',
+  teal: '#1d7a74',
+  sea: '#5fb3a9',
+  amber: '#f2b441',
+  rust: '#c4553a',
+  paper: '#f6f4ef',
+  line: '#dcd8cf',
+  pass: '#2f8f5b',
+  fail: '#c4553a',
+};
+
+export const theme: ThemeConfig = {
+  token: {
+    colorPrimary: palette.teal,
+    colorInfo: palette.teal,
+    colorSuccess: palette.pass,
+    colorError: palette.fail,
+    colorWarning: '#b7791f',
+    colorBgLayout: palette.paper,
+    colorBorderSecondary: palette.line,
+    borderRadius: 6,
+    fontFamily: "'Work Sans', system-ui, sans-serif",
+    fontSize: 14,
+  },
+  components: {
+    Layout: { headerBg: palette.ink, siderBg: '#ffffff' },
+    Menu: { darkItemBg: palette.ink },
+  },
+};

@@ -1,0 +1,22 @@
+import { existsSync, mkdtempSync, readFileSync, readdirSync, rmSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { build } from 'vite';
+
+describe('the client', () => {
+  it('builds with Vite into an index.html with hashed assets and the shipped font', async () => {
+    const outDir = mkdtempSync(path.join(os.tmpdir(), 'lobewise-client-'));
+    try {
+      await build({ root: process.cwd(), logLevel: 'silent', build: { outDir, emptyOutDir: true } });
+      const html = readFileSync(path.join(outDir, 'index.html'), 'utf8');
+      expect(html).toMatch(/<script type="module" crossorigin src="\/assets\/index-[\w-]+\.js">/);
+      const assets = readdirSync(path.join(outDir, 'assets'));
+      // Work Sans ships with the app (no font download at run time).
+      expect(assets.some((a) => /work-sans.*\.woff2$/.test(a))).toBe(true);
+      expect(existsSync(path.join(outDir, 'favicon.svg'))).toBe(true);
+    } finally {
+      rmSync(outDir, { recursive: true, force: true });
+    }
+  }, 240_000);
+});

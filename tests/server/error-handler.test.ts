@@ -1,0 +1,74 @@
+import express from 'express';
+import request from 'supertest';
+import { describe, expect, it } from 'vitest';
+import { z } from 'zod';
+import { ApiError, NotFound } from '../../server/errors.ts';
+import { errorHandler } from '../../server/middleware/error-handler.ts';
+import { validate } from '../../server/middleware/validate.ts';
+import { createLogger } from '../../server/logger.ts';
+
+const log = createLogger({ LOG_LEVEL: 'silent', NODE_ENV: 'test' });
+
+function appWith(route: express.RequestHandler[]) {
+  const app = express();
+  app.use(express.json({ limit: '1kb' }));
+  app.post('/thing', ...route, (req, res) => res.json({ got: req.body }));
+  app.use(errorHandler(log));
+  return app;
+}
+
+const Thing = z.object({ nx: z.number().int().min(1, 'must be at least 1'), name: z.string() }).strict();
+
+describe('errorHandler', () => {
+  it('turns a zod failure into a 400 naming the field and the rule', async () => {
+    const res = await request(appWith([validate({ body: Thing })])).post('/thing').send({ nx: 0, name: 'a' });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('invalid_input');
+    expect(res.body.error.message).toMatch(/^nx: /);
+    expect(res.body.error.fields[0].field).toBe('nx');
+  });
+
+  it('lists every failing field at once', async () => {
+    const res = await request(appWith([validate({ body: Thing })])).post('/thing').send({ nx: 'x', extra: 1 });
+    expect(res.status).toBe(400);
+    const fields = res.body.error.fields.map((f: { field: string }) => f.field);
+    expect(fields).toContain('nx');
+    expect(fields).toContain('name');
+  });
+
+  it('replaces the body with the parsed value', async () => {
+    const Coerced = z.object({ n: z.coerce.number() });
+    const res = await request(appWith([validate({ body: Coerced })])).post('/thing').send({ n: '5' });
+    expect(res.body.got).toEqual({ n: 5 });
+  });
+
+  it('answers a known error with its own status and code', async () => {
+    const res = await request(appWith([() => { throw NotFound('study'); }])).post('/thing').send({});
+    expect(res.status).toBe(404);
+    expect(res.body).toEqual({ error: { code: 'not_found', message: 'study not found' } });
+  });
+
+  it('hides unknown errors behind a generic 500 without a stack', async () => {
+    const res = await request(appWith([() => { throw new Error('secret detail at /srv/x.ts:12'); }])).post('/thing').send({});
+    expect(res.status).toBe(500);
+    expect(JSON.stringify(res.body)).not.toMatch(/secret|\.ts|at /);
+    expect(res.body.error.code).toBe('internal');
+  });
+
+  it('forwards rejected async handlers (Express 5)', async () => {
+    const res = await request(appWith([async () => { throw new ApiError(409, 'conflict', 'signed'); }])).post('/thing').send({});
+    expect(res.status).toBe(409);
+  });
+
+  it('answers malformed JSON with 400 naming the body', async () => {
+    const res = await request(appWith([])).post('/thing').set('content-type', 'application/json').send('{"nx":');
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields[0].field).toBe('body');
+  });
+
+  it('answers an oversized body with 413', async () => {
+    const res = await request(appWith([])).post('/thing').send({ s: 'x'.repeat(5000) });
+    expect(res.status).toBe(413);
+    expect(res.body.error.code).toBe('payload_too_large');
+  });
+});
