@@ -1,0 +1,31 @@
+import type { EngineWarning } from './metrics.ts';
+
+export interface WarningFacts {
+  beamVisible: boolean;
+  gratingLobeVisible: boolean;
+  azClipped: boolean;
+  elClipped: boolean;
+  pointingErrorDeg: number | null;
+  hpbwAzDeg: number;
+  hpbwElDeg: number;
+}
+
+/** The warnings for one point, from facts the evaluation already measured. */
+export function designWarnings(f: WarningFacts): EngineWarning[] {
+  const out: EngineWarning[] = [];
+  if (!f.beamVisible) {
+    out.push({
+      code: 'beam-beyond-visible',
+      message: 'the progressive phase puts the intended main beam beyond the visible region (past endfire)',
+    });
+  }
+  if (f.gratingLobeVisible) out.push({ code: 'grating-lobe-visible', message: 'a grating lobe lies in the visible region at this steer' });
+  if (f.azClipped || f.elClipped) {
+    const cut = f.azClipped && f.elClipped ? 'az and el cuts' : f.azClipped ? 'az cut' : 'el cut';
+    out.push({ code: 'beam-clipped', message: `the main beam meets the horizon in the ${cut}; its width is measured to the horizon` });
+  }
+  if (f.pointingErrorDeg !== null && f.pointingErrorDeg > 0.5 * Math.min(f.hpbwAzDeg, f.hpbwElDeg)) {
+    out.push({ code: 'peak-off-steer', message: `the pattern peak is ${f.pointingErrorDeg.toFixed(1)}° from the intended steer, more than half the beamwidth` });
+  }
+  return out;
+}

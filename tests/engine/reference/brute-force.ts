@@ -1,0 +1,298 @@
+/**
+ * A slow, independent reference for the engine's metrics: direct sums over element positions,
+ * dense angular sampling, zooming grid searches and midpoint integration over the whole sphere.
+ * No closed forms, no shared search code; only the validated taper weights are borrowed.
+ */
+import type { Design } from '../../../shared/schemas/design.ts';
+import { taperWeights } from '../../../shared/engine/taper/taper-weights.ts';
+
+const C = 299792458;
+const D2R = Math.PI / 180;
+
+export interface RefArray {
+  xs: number[]; // element positions, m, x fastest
+  ys: number[];
+  re: number[];
+  im: number[];
+  k: number;
+  nx: number;
+  ny: number;
+  element: (azDeg: number, elDeg: number) => number;
+  steer: { az: number; el: number }; // degrees, the tie-break direction
+  /** Per-axis weights when the phases are continuous (then AF = AFx·AFy, still summed directly). */
+  axes?: { x: number[]; xr: number[]; xi: number[]; y: number[]; yr: number[]; yi: number[] };
+}
+
+export function refElement(design: Design): (azDeg: number, elDeg: number) => number {
+  const e = design.element;
+  if (e.kind === 'isotropic') return () => 1;
+  if (e.kind === 'cosine') {
+    return (az, el) => {
+      const c = Math.cos(az * D2R) * Math.cos(el * D2R);
+      return c > 0 ? Math.pow(c, e.q) : 0;
+    };
+  }
+  return (az, el) => {
+    const av = -Math.min(12 * (el / 65) ** 2, 30);
+    const ah = -Math.min(12 * (az / 65) ** 2, 30);
+    return Math.pow(10, (-Math.min(-(av + ah), 30) + 8) / 10);
+  };
+}
+
+/** Codes per element from the rules, written out again independently. */
+function refPhasesDeg(design: Design): number[] {
+  const lam = C / (design.frequencyGHz * 1e9);
+  const u0 = Math.sin(design.steerAzDeg * D2R) * Math.cos(design.steerElDeg * D2R);
+  const v0 = Math.sin(design.steerElDeg * D2R);
+  const ddx = design.grouping === 'row' ? 0 : (360 * design.dxMm * 1e-3 * u0) / lam;
+  const ddy = design.grouping === 'column' ? 0 : (360 * design.dyMm * 1e-3 * v0) / lam;
+  const out: number[] = [];
+  for (let n = 0; n < design.ny; n++) {
+    for (let m = 0; m < design.nx; m++) {
+      if (design.phaseBits === null) {
+        out.push(-(m * ddx + n * ddy));
+        continue;
+      }
+      const levels = 2 ** design.phaseBits;
+      const step = 360 / levels;
+      const ch = design.grouping === 'element' ? n * design.nx + m : design.grouping === 'column' ? m : n;
+      let code: number;
+      if (design.codes) code = design.codes[ch]!;
+      else {
+        const mm = design.grouping === 'row' ? 0 : m;
+        const nn = design.grouping === 'column' ? 0 : n;
+        code = (((Math.floor((mm * ddx + nn * ddy) / step + 0.5)) % levels) + levels) % levels;
+      }
+      out.push(-code * step);
+    }
+  }
+  return out;
+}
+
+export function refArray(design: Design): RefArray {
+  const lam = C / (design.frequencyGHz * 1e9);
+  const tx = taperWeights(design.taperX, design.nx);
+  const ty = taperWeights(design.taperY, design.ny);
+  const ph = refPhasesDeg(design);
+  const a: RefArray = { xs: [], ys: [], re: [], im: [], k: (2 * Math.PI) / lam, nx: design.nx, ny: design.ny, element: refElement(design), steer: design.codes ? { az: 0, el: 0 } : { az: design.steerAzDeg, el: design.steerElDeg } };
+  for (let n = 0; n < design.ny; n++) {
+    for (let m = 0; m < design.nx; m++) {
+      a.xs.push((m - (design.nx - 1) / 2) * design.dxMm * 1e-3);
+      a.ys.push((n - (design.ny - 1) / 2) * design.dyMm * 1e-3);
+      const amp = tx[m]! * ty[n]!;
+      const p = ph[n * design.nx + m]! * D2R;
+      a.re.push(amp * Math.cos(p));
+      a.im.push(amp * Math.sin(p));
+    }
+  }
+  if (design.phaseBits === null) {
+    const axes = { x: [] as number[], xr: [] as number[], xi: [] as number[], y: [] as number[], yr: [] as number[], yi: [] as number[] };
+    for (let m = 0; m < design.nx; m++) {
+      const p = ph[m]! * D2R;
+      axes.x.push(a.xs[m]!);
+      axes.xr.push(tx[m]! * Math.cos(p));
+      axes.xi.push(tx[m]! * Math.sin(p));
+    }
+    for (let n = 0; n < design.ny; n++) {
+      const p = ph[n * design.nx]! * D2R;
+      axes.y.push(a.ys[n * design.nx]!);
+      axes.yr.push(ty[n]! * Math.cos(p));
+      axes.yi.push(ty[n]! * Math.sin(p));
+    }
+    a.axes = axes;
+  }
+  return a;
+}
+
+function line(pos: number[], re: number[], im: number[], k: number, s: number): number {
+  let sr = 0;
+  let si = 0;
+  for (let i = 0; i < pos.length; i++) {
+    const c = Math.cos(k * pos[i]! * s);
+    const sn = Math.sin(k * pos[i]! * s);
+    sr += re[i]! * c - im[i]! * sn;
+    si += re[i]! * sn + im[i]! * c;
+  }
+  return sr * sr + si * si;
+}
+
+/** Direct-sum |AF|² at (u, v). */
+export function refAf(a: RefArray, u: number, v: number): number {
+  if (a.axes) return line(a.axes.x, a.axes.xr, a.axes.xi, a.k, u) * line(a.axes.y, a.axes.yr, a.axes.yi, a.k, v);
+  let sr = 0;
+  let si = 0;
+  for (let i = 0; i < a.re.length; i++) {
+    const p = a.k * (a.xs[i]! * u + a.ys[i]! * v);
+    const c = Math.cos(p);
+    const s = Math.sin(p);
+    sr += a.re[i]! * c - a.im[i]! * s;
+    si += a.re[i]! * s + a.im[i]! * c;
+  }
+  return sr * sr + si * si;
+}
+
+export function refP(a: RefArray, azDeg: number, elDeg: number): number {
+  const u = Math.sin(azDeg * D2R) * Math.cos(elDeg * D2R);
+  const v = Math.sin(elDeg * D2R);
+  return refAf(a, u, v) * a.element(azDeg, elDeg);
+}
+
+function angleDeg(az1: number, el1: number, az2: number, el2: number): number {
+  const d = (az: number, el: number) => [Math.sin(az * D2R) * Math.cos(el * D2R), Math.sin(el * D2R), Math.cos(az * D2R) * Math.cos(el * D2R)];
+  const p = d(az1, el1);
+  const q = d(az2, el2);
+  const dot = p[0]! * q[0]! + p[1]! * q[1]! + p[2]! * q[2]!;
+  return Math.acos(Math.max(-1, Math.min(1, dot))) / D2R;
+}
+
+/** Peak over the front hemisphere: a coarse grid, then each good local maximum zoomed by shrinking grids. */
+export function refPeak(a: RefArray, coarseDeg: number): { az: number; el: number; p: number } {
+  const n = Math.round(180 / coarseDeg) + 1;
+  const g: number[] = [];
+  for (let j = 0; j < n; j++) for (let i = 0; i < n; i++) g.push(refP(a, -90 + i * coarseDeg, -90 + j * coarseDeg));
+  let max = 0;
+  for (const x of g) max = Math.max(max, x);
+  const starts: { az: number; el: number; p: number }[] = [];
+  for (let j = 0; j < n; j++) {
+    for (let i = 0; i < n; i++) {
+      const x = g[j * n + i]!;
+      if (x < 0.2 * max) continue;
+      let ok = true;
+      for (let dj = -1; dj <= 1; dj++) for (let di = -1; di <= 1; di++) {
+        const ii = i + di, jj = j + dj;
+        if (ii >= 0 && jj >= 0 && ii < n && jj < n && g[jj * n + ii]! > x) ok = false;
+      }
+      if (ok) starts.push({ az: -90 + i * coarseDeg, el: -90 + j * coarseDeg, p: x });
+    }
+  }
+  starts.sort((p, q) => q.p - p.p);
+  const results = starts.slice(0, 16).map((s) => {
+    let { az, el } = s;
+    let h = coarseDeg;
+    while (h > 2e-5) {
+      let best = { az, el, p: refP(a, az, el) };
+      for (let dj = -5; dj <= 5; dj++) for (let di = -5; di <= 5; di++) {
+        const aa = Math.max(-90, Math.min(90, az + (di * h) / 2.5));
+        const ee = Math.max(-90, Math.min(90, el + (dj * h) / 2.5));
+        const p = refP(a, aa, ee);
+        if (p > best.p) best = { az: aa, el: ee, p };
+      }
+      az = best.az;
+      el = best.el;
+      h /= 3;
+    }
+    return { az, el, p: refP(a, az, el) };
+  });
+  let best = results[0]!;
+  for (const r of results) {
+    const tie = Math.abs(r.p - best.p) <= 1e-6 * Math.max(r.p, best.p);
+    if ((tie && angleDeg(r.az, r.el, a.steer.az, a.steer.el) < angleDeg(best.az, best.el, a.steer.az, a.steer.el)) || (!tie && r.p > best.p)) best = r;
+  }
+  return best;
+}
+
+/** HPBW, clipping and SLL of a cut sampled every stepDeg (linear interpolation of the half-power points). */
+export function refCut(f: (deg: number) => number, peakDeg: number, peakP: number, stepDeg: number) {
+  const n = Math.round(180 / stepDeg) + 1;
+  const ang: number[] = [];
+  const s: number[] = [];
+  for (let i = 0; i < n; i++) {
+    ang.push(-90 + (180 * i) / (n - 1));
+    s.push(f(ang[i]!));
+  }
+  let ip = 0;
+  for (let i = 0; i < n; i++) if (Math.abs(ang[i]! - peakDeg) < Math.abs(ang[ip]! - peakDeg)) ip = i;
+  const half = peakP / 2;
+  const edge = (dir: number) => {
+    for (let i = ip + dir; i >= 0 && i < n; i += dir) {
+      if (s[i]! < half) {
+        const j = i - dir;
+        const t = (s[j]! - half) / (s[j]! - s[i]!);
+        return { a: ang[j]! + t * (ang[i]! - ang[j]!), clipped: false };
+      }
+    }
+    return { a: dir * 90, clipped: true };
+  };
+  const lo = edge(-1);
+  const hi = edge(1);
+  const minEdge = (dir: number) => {
+    for (let i = ip + dir; i + dir >= 0 && i + dir < n; i += dir) if (s[i + dir]! > s[i]! * (1 + 1e-9)) return i;
+    return dir > 0 ? n - 1 : 0;
+  };
+  const L = minEdge(-1);
+  const R = minEdge(1);
+  let sl = -Infinity;
+  for (let i = 0; i < n; i++) {
+    if (i >= L && i <= R) continue;
+    const left = i === 0 ? -Infinity : s[i - 1]!;
+    const right = i === n - 1 ? -Infinity : s[i + 1]!;
+    if (s[i]! > left && s[i]! >= right) sl = Math.max(sl, s[i]!);
+  }
+  return { hpbw: hi.a - lo.a, clipped: lo.clipped || hi.clipped, sllDb: sl > 0 ? 10 * Math.log10(sl / peakP) : null };
+}
+
+/** ∮ P dΩ by the midpoint rule over az ∈ [-180°, 180°) and v = sin(el) ∈ [-1, 1] (dΩ = d(az)·dv). */
+export function refSpherePower(a: RefArray, naz: number, nv: number): number {
+  let total = 0;
+  const colRe = new Float64Array(a.nx);
+  const colIm = new Float64Array(a.nx);
+  for (let j = 0; j < nv; j++) {
+    const v = -1 + (2 * (j + 0.5)) / nv;
+    const el = Math.asin(v) / D2R;
+    const ce = Math.sqrt(1 - v * v);
+    // Sum the y part once per row of the grid (a reorganised direct sum).
+    colRe.fill(0);
+    colIm.fill(0);
+    for (let n = 0; n < a.ny; n++) for (let m = 0; m < a.nx; m++) {
+      const i = n * a.nx + m;
+      const p = a.k * a.ys[i]! * v;
+      colRe[m] = colRe[m]! + a.re[i]! * Math.cos(p) - a.im[i]! * Math.sin(p);
+      colIm[m] = colIm[m]! + a.re[i]! * Math.sin(p) + a.im[i]! * Math.cos(p);
+    }
+    for (let i = 0; i < naz; i++) {
+      const az = -180 + (360 * (i + 0.5)) / naz;
+      const u = Math.sin(az * D2R) * ce;
+      let sr = 0;
+      let si = 0;
+      for (let m = 0; m < a.nx; m++) {
+        const p = a.k * a.xs[m]! * u;
+        const c = Math.cos(p);
+        const s = Math.sin(p);
+        sr += colRe[m]! * c - colIm[m]! * s;
+        si += colRe[m]! * s + colIm[m]! * c;
+      }
+      total += (sr * sr + si * si) * a.element(az, el);
+    }
+  }
+  return total * ((2 * Math.PI) / naz) * (2 / nv);
+}
+
+export interface RefMetrics {
+  peakAzDeg: number;
+  peakElDeg: number;
+  hpbwAzDeg: number;
+  hpbwElDeg: number;
+  hpbwAzClipped: boolean;
+  hpbwElClipped: boolean;
+  sllAzDb: number | null;
+  sllElDb: number | null;
+  directivityDbi: number;
+}
+
+export function refMetrics(design: Design, opts: { coarseDeg: number; cutStepDeg: number; naz: number; nv: number }): RefMetrics {
+  const a = refArray(design);
+  const pk = refPeak(a, opts.coarseDeg);
+  const az = refCut((x) => refP(a, x, pk.el), pk.az, pk.p, opts.cutStepDeg);
+  const el = refCut((x) => refP(a, pk.az, x), pk.el, pk.p, opts.cutStepDeg);
+  return {
+    peakAzDeg: pk.az,
+    peakElDeg: pk.el,
+    hpbwAzDeg: az.hpbw,
+    hpbwElDeg: el.hpbw,
+    hpbwAzClipped: az.clipped,
+    hpbwElClipped: el.clipped,
+    sllAzDb: az.sllDb,
+    sllElDb: el.sllDb,
+    directivityDbi: 10 * Math.log10((4 * Math.PI * pk.p) / refSpherePower(a, opts.naz, opts.nv)),
+  };
+}
