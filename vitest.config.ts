@@ -1,5 +1,5 @@
 import { defineConfig, mergeConfig } from 'vitest/config';
-import viteConfig from './vite.config';
+import viteConfig from './vite.config.ts';
 
 // Three projects so that pure tests never wait for PostgreSQL:
 // unit (engine, shared code), components (jsdom) and api (real PostgreSQL started by globalSetup).

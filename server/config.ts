@@ -21,6 +21,12 @@ const EnvSchema = z.object({
   BODY_LIMIT: z.string().default('1mb'),
   SWEEP_THREADS: z.coerce.number().int().min(1).max(64).optional(),
   SWEEP_POINT_LIMIT: z.coerce.number().int().min(1).default(2_000_000),
+  /** Seconds between looks for sweep chunks nobody runs (new sweeps from other processes, dead workers). */
+  SWEEP_RECOVERY_SECONDS: z.coerce.number().min(0.2).max(3600).default(5),
+  /** Largest range-data or calibration file accepted (bytes). */
+  UPLOAD_LIMIT_BYTES: z.coerce.number().int().min(1024).default(2_000_000),
+  /** Monte Carlo runs with more trials than this go to the worker pool. */
+  MONTE_CARLO_INLINE_TRIALS: z.coerce.number().int().min(1).default(200),
   SMTP_URL: z.string().optional(),
   SMTP_FAKE_PORT: port.default(2525),
   MAIL_FROM: z.string().default('Lobewise <no-reply@lobewise.test>'),
@@ -32,7 +38,9 @@ const EnvSchema = z.object({
 export type Config = Readonly<z.output<typeof EnvSchema>>;
 
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
-  const parsed = EnvSchema.safeParse(env);
+  // An empty variable means "not set", as in most shells' `FOO= cmd`.
+  const present = Object.fromEntries(Object.entries(env).filter(([, v]) => v !== undefined && v !== ''));
+  const parsed = EnvSchema.safeParse(present);
   if (!parsed.success) {
     const issue = parsed.error.issues[0]!;
     throw new Error(`Config validation error: ${issue.path.join('.')}: ${issue.message}`);

@@ -1,4 +1,5 @@
 /** Brings up the database for a process: our own cluster unless DATABASE_URL points elsewhere, then migrations. */
+import { chmodSync, mkdirSync } from 'node:fs';
 import path from 'node:path';
 import type { DataSource } from 'typeorm';
 import type { Config } from '../config.ts';
@@ -21,6 +22,9 @@ export async function openDatabase(
   let cluster: Cluster | undefined;
   let url = config.DATABASE_URL;
   if (!url) {
+    // DATA_DIR is ours: let the unprivileged server user pass through it when we run as root.
+    mkdirSync(config.DATA_DIR, { recursive: true });
+    if (process.getuid?.() === 0) chmodSync(config.DATA_DIR, 0o711);
     cluster = await startCluster({
       dataDir: path.join(config.DATA_DIR, 'postgres'),
       port: config.PGPORT_LOBEWISE,

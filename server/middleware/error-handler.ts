@@ -29,11 +29,35 @@ function fromBodyParser(err: BodyParserError): ApiError | null {
   }
 }
 
+interface PgError extends Error {
+  code?: string;
+}
+
+/** PostgreSQL errors a request can cause or meet, by SQLSTATE; everything else stays a 500. */
+function fromPostgres(err: PgError): ApiError | null {
+  const code = err.code ?? '';
+  if (code === '23503') return new ApiError(409, 'conflict', 'other records still refer to this one; remove or archive them first');
+  if (code === '23505') return new ApiError(409, 'conflict', 'a record with the same key already exists');
+  if (code === '22P02') return new ApiError(400, 'invalid_input', 'a value has the wrong format (for example an id that is not a UUID)');
+  if (code === 'P0001' && /signed/i.test(err.message)) return new ApiError(409, 'conflict', err.message);
+  // Server shutting down, connection lost or refused: the database is away, not the request at fault.
+  if (['57P01', '57P02', '57P03', '08006', '08001', '08003', 'ECONNREFUSED', 'ECONNRESET'].includes(code) ||
+      /Connection terminated|connection timeout/i.test(err.message)) {
+    return new ApiError(503, 'database_unavailable', 'the database is unavailable; try again in a moment');
+  }
+  return null;
+}
+
 /** Mounted last. Known errors answer with their status; anything else is logged and answered as a bare 500. */
 export function errorHandler(log: Logger): ErrorRequestHandler {
   // Keep all four parameters: Express recognises an error handler by its arity.
   return (err: unknown, req, res, _next) => {
-    const known = err instanceof ApiError ? err : err instanceof Error ? fromBodyParser(err as BodyParserError) : null;
+    const known =
+      err instanceof ApiError
+        ? err
+        : err instanceof Error
+          ? (fromBodyParser(err as BodyParserError) ?? fromPostgres(err as PgError))
+          : null;
     if (res.headersSent) {
       req.socket.destroy();
       return;

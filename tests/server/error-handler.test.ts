@@ -71,4 +71,16 @@ describe('errorHandler', () => {
     expect(res.status).toBe(413);
     expect(res.body.error.code).toBe('payload_too_large');
   });
+
+  it('maps PostgreSQL errors a request can meet to 4xx/503 by SQLSTATE', async () => {
+    const pgError = (code: string, message = 'x') => Object.assign(new Error(message), { code });
+    const statusFor = async (code: string) =>
+      (await request(appWith([() => { throw pgError(code); }])).post('/thing').send({})).status;
+    expect(await statusFor('23503')).toBe(409);
+    expect(await statusFor('23505')).toBe(409);
+    expect(await statusFor('22P02')).toBe(400);
+    expect(await statusFor('57P01')).toBe(503);
+    expect(await statusFor('ECONNREFUSED')).toBe(503);
+    expect(await statusFor('42P01')).toBe(500);
+  });
 });
