@@ -1,0 +1,36 @@
+/**
+ * Review and sign-off: review requests and the study's review state here, plus the comments, decisions and
+ * packet routers, mounted together at /api with one line in routes/index.ts.
+ */
+import { Router, type Request } from 'express';
+import { linkBase } from '../auth/links.ts';
+import type { AppContext } from '../context.ts';
+import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts';
+import { validate } from '../middleware/validate.ts';
+import { answerReviewRequest, getStudyReview, requestReview } from '../services/review-request-service.ts';
+import { ReviewAnswerSchema, ReviewRequestCreateSchema, type ReviewAnswer, type ReviewRequestCreate } from '../../shared/schemas/review.ts';
+import { IdParamsSchema } from '../../shared/schemas/study.ts';
+import { commentsRouter } from './comments.ts';
+import { decisionsRouter } from './decisions.ts';
+import { packetRouter } from './packet.ts';
+
+const id = validate({ params: IdParamsSchema });
+const idOf = (req: Request) => String(req.params.id);
+
+export function reviewRouter(ctx: AppContext): Router {
+  const router = Router();
+  router.get('/studies/:id/review', requireAuth, id, async (req, res) => {
+    res.json(await getStudyReview(ctx, userOf(req), idOf(req)));
+  });
+  router.post('/studies/:id/review-requests', requireRole('engineer'), id, validate({ body: ReviewRequestCreateSchema }), async (req, res) => {
+    const body = req.body as ReviewRequestCreate;
+    res.status(201).json(await requestReview(ctx, userOf(req), idOf(req), body, linkBase(ctx.config, req)));
+  });
+  router.post('/review-requests/:id/answer', requireRole('reviewer'), id, validate({ body: ReviewAnswerSchema }), async (req, res) => {
+    res.json(await answerReviewRequest(ctx, userOf(req), idOf(req), req.body as ReviewAnswer, linkBase(ctx.config, req)));
+  });
+  router.use(commentsRouter(ctx));
+  router.use(decisionsRouter(ctx));
+  router.use(packetRouter(ctx));
+  return router;
+}

@@ -1,0 +1,176 @@
+/**
+ * The review packet's data: one object that the PDF (server/packet/render-pdf.ts) and the printable page
+ * (src/views/PacketView.vue) both draw, so their tables and charts always agree.
+ */
+import type { AuthUser } from '../auth/types.ts';
+import type { AppContext } from '../context.ts';
+import { Candidate } from '../entities/candidate.ts';
+import { TargetSheetRow } from '../entities/target-sheet.ts';
+import { Team } from '../entities/team.ts';
+import { scanDesign } from '../packet/design-scan.ts';
+import { ENGINE_VERSION } from '../../shared/engine/index.ts';
+import { DesignSchema } from '../../shared/schemas/design.ts';
+import { exposureEstimate, REFERENCE_LEVEL_SOURCE, RF_EXPOSURE_CAUTION, type ExposureEstimate } from '../../shared/safety/index.ts';
+import { scanAngleDeg, type DesignFigures } from '../../shared/targets/figures.ts';
+import { LIMIT_KEYS, LIMIT_LABELS, type LimitKey, type TargetSheet } from '../../shared/targets/sheet.ts';
+import { rowVerdict, type Verdict } from '../../shared/trade/judge.ts';
+import { compareByObjective, RANK_OBJECTIVES } from '../../shared/trade/rank.ts';
+import type { TradeDesign, TradeParams } from '../../shared/trade/trade-design.ts';
+import { listDecisions, type DecisionView } from './decision-service.ts';
+import { getStudyReview, type StudyReview } from './review-request-service.ts';
+import { findStudyFor } from './study-access.ts';
+
+/** Ranked rows printed; a packet is read, not searched. */
+export const PACKET_MAX_RANKED = 20;
+
+export interface PacketLimit {
+  key: LimitKey;
+  label: string;
+  value: string;
+}
+
+export interface PacketRankedDesign {
+  rank: number;
+  label: string;
+  verdict: Verdict;
+  figures: DesignFigures;
+}
+
+export interface PacketChartPoint {
+  /** Angle from broadside, signed along the scan axis (degrees). */
+  angleDeg: number;
+  hpbwAzDeg: number | null;
+  hpbwElDeg: number | null;
+  scanLossDb: number | null;
+  eirpDbm: number | null;
+}
+
+export interface PacketData {
+  study: { id: string; name: string; description: string; teamName: string };
+  generatedAt: string;
+  engineVersion: string;
+  job: string;
+  targetSheet: { name: string | null; preset: string | null; limits: PacketLimit[] } | null;
+  rankObjective: string;
+  ranked: PacketRankedDesign[];
+  decision: DecisionView | null;
+  history: DecisionView[];
+  chart: { label: string; axis: 'az' | 'el'; points: PacketChartPoint[] } | null;
+  /** Far-field estimate from the chosen design's peak EIRP; null without a signed decision that has an EIRP. */
+  exposure: ExposureEstimate | null;
+  /** Always printed, with or without an estimate. */
+  caution: string;
+  referenceSource: string;
+  review: StudyReview;
+}
+
+const range = (r: { min?: number | null; max?: number | null }, unit: string) =>
+  `${r.min ?? '…'} to ${r.max ?? '…'} ${unit}`.trim();
+
+function limitText(key: LimitKey, sheet: TargetSheet): string | null {
+  const v = sheet[key];
+  if (v === null || v === undefined) return null;
+  if (typeof v === 'boolean') return v ? 'required' : null;
+  if (typeof v === 'number') return String(v);
+  return range(v, key.startsWith('scan') || key.startsWith('hpbw') ? '°' : '');
+}
+
+function sheetLimits(sheet: TargetSheet): PacketLimit[] {
+  return LIMIT_KEYS.flatMap((key) => {
+    const value = limitText(key, sheet);
+    return value === null ? [] : [{ key, label: LIMIT_LABELS[key], value }];
+  });
+}
+
+function jobParagraph(description: string, sheetName: string | null, limits: PacketLimit[], candidates: number): string {
+  if (description.trim()) return description.trim();
+  const aim = sheetName ? `meet the target sheet "${sheetName}"` : 'meet the study’s requirements';
+  const count = limits.length ? ` (${limits.length} limits)` : '';
+  return `Choose one phased-array design that will ${aim}${count}, from the ${candidates} candidate${candidates === 1 ? '' : 's'} and the sweeps of this study, and record the choice with its rationale and the alternatives considered.`;
+}
+
+/** Candidates as trade rows (each evaluated across the scan), passing ones first, then by the default objective. */
+function rankCandidates(candidates: Candidate[], sheet: TargetSheet | null): { rows: PacketRankedDesign[] } {
+  const rows = candidates.flatMap((c, i) => {
+    // Stored designs are parsed on the way in; re-parse so an older row missing a default cannot break the packet.
+    const parsed = DesignSchema.safeParse(c.design);
+    if (!parsed.success) return [];
+    const scan = scanDesign(parsed.data, sheet);
+    const row: TradeDesign = {
+      designIndex: i,
+      params: parsed.data as unknown as TradeParams,
+      figures: scan.figures,
+      gratingLobeOnsetAzDeg: scan.at.gratingLobeOnsetAzDeg,
+      gratingLobeOnsetElDeg: scan.at.gratingLobeOnsetElDeg,
+      scanRangeDeg: Math.max(...scan.points.map((p) => scanAngleDeg(p.steerAzDeg, p.steerElDeg))),
+      directivityMaxDbi: Math.max(...scan.points.map((p) => p.metrics.directivityDbi)),
+      points: scan.points.length,
+      failedPoints: 0,
+    };
+    return [{ label: c.name, row, verdict: rowVerdict(row, sheet) }];
+  });
+  const order: Record<Verdict, number> = { pass: 0, 'n/a': 1, fail: 2 };
+  rows.sort((a, b) => order[a.verdict] - order[b.verdict] || compareByObjective(a.row, b.row, RANK_OBJECTIVES[0]!.terms));
+  return {
+    rows: rows.slice(0, PACKET_MAX_RANKED).map((r, i) => ({ rank: i + 1, label: r.label, verdict: r.verdict, figures: r.row.figures })),
+  };
+}
+
+function chartOf(decision: DecisionView): PacketData['chart'] {
+  const axis = decision.metrics.axis;
+  const points = decision.metrics.points.map((p) => {
+    const m = p.metrics as Record<string, number | null | undefined>;
+    const signed = axis === 'el' ? Math.sign(p.steerElDeg) : Math.sign(p.steerAzDeg);
+    return {
+      angleDeg: (signed < 0 ? -1 : 1) * scanAngleDeg(p.steerAzDeg, p.steerElDeg),
+      hpbwAzDeg: m.hpbwAzDeg ?? null,
+      hpbwElDeg: m.hpbwElDeg ?? null,
+      scanLossDb: m.scanLossDb ?? null,
+      eirpDbm: m.eirpDbm ?? null,
+    };
+  });
+  return { label: decision.label, axis, points: points.sort((a, b) => a.angleDeg - b.angleDeg) };
+}
+
+/** Peak EIRP of the chosen design over its frozen points (dBm), if it has a channel power. */
+function peakEirp(decision: DecisionView): number | null {
+  const figures = decision.metrics.figures as Partial<DesignFigures>;
+  return typeof figures.peakEirpDbm === 'number' ? figures.peakEirpDbm : null;
+}
+
+export interface PacketOptions {
+  /** Distance for the RF-exposure estimate (m). */
+  distanceM?: number;
+  /** Reference level for the estimate (W/m²). */
+  referenceWm2?: number;
+}
+
+/** Everything the packet shows, for a user who may read the study. */
+export async function buildPacket(ctx: AppContext, user: AuthUser, studyId: string, options: PacketOptions = {}): Promise<PacketData> {
+  const study = await findStudyFor(ctx, user, studyId, 'read');
+  const team = await ctx.db.getRepository(Team).findOneBy({ id: study.teamId });
+  const sheetRow = await ctx.db.getRepository(TargetSheetRow).findOneBy({ studyId });
+  const sheet = sheetRow?.sheet ?? null;
+  const candidates = await ctx.db.getRepository(Candidate).find({ where: { studyId }, order: { position: 'ASC', createdAt: 'ASC' } });
+  const history = await listDecisions(ctx, user, studyId);
+  const decision = history.find((d) => d.status === 'signed') ?? null;
+  const limits = sheet ? sheetLimits(sheet) : [];
+  const eirp = decision ? peakEirp(decision) : null;
+  return {
+    study: { id: study.id, name: study.name, description: study.description, teamName: team?.name ?? '' },
+    generatedAt: new Date().toISOString(),
+    engineVersion: ENGINE_VERSION,
+    job: jobParagraph(study.description, sheet?.name ?? null, limits, candidates.length),
+    targetSheet: sheet ? { name: sheet.name ?? null, preset: sheetRow?.preset ?? null, limits } : null,
+    rankObjective: RANK_OBJECTIVES[0]!.label,
+    ranked: rankCandidates(candidates, sheet).rows,
+    decision,
+    history,
+    chart: decision ? chartOf(decision) : null,
+    exposure: eirp === null ? null : exposureEstimate({ eirpDbm: eirp, distanceM: options.distanceM, referenceWm2: options.referenceWm2 }),
+    caution: RF_EXPOSURE_CAUTION,
+    referenceSource: REFERENCE_LEVEL_SOURCE,
+    review: await getStudyReview(ctx, user, studyId),
+  };
+}
+
