@@ -6,8 +6,8 @@ const benches: Record<string, () => Promise<{ run: (argv: string[]) => Promise<v
   load: () => import('./load.ts'),
 };
 
-const [name, ...rest] = process.argv.slice(2);
-const names = name ? [name] : Object.keys(benches);
+const [only, ...rest] = process.argv.slice(2);
+const names = only ? [only] : Object.keys(benches);
 for (const n of names) {
   const load = benches[n];
   if (!load) {
@@ -17,3 +17,5 @@ for (const n of names) {
   process.stdout.write(`\n# bench ${n}\n`);
   await (await load()).run(rest);
 }
+
+export {};

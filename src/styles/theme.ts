@@ -27,7 +27,6 @@ export const theme: ThemeConfig = {
     fontSize: 14,
   },
   components: {
-    Layout: { headerBg: palette.ink, siderBg: '#ffffff' },
-    Menu: { darkItemBg: palette.ink },
+    Layout: { colorBgHeader: palette.ink, colorBgBody: palette.paper },
   },
 };

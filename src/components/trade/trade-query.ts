@@ -1,0 +1,60 @@
+/**
+ * AG Grid's sort and filter models as query parameters of the sweeps results API, and back to nothing else:
+ * the server does the sorting and filtering so a 100,000-row sweep pages quickly.
+ */
+import type { SortModelItem } from 'ag-grid-community';
+import { serverKeyOf, tradeField } from '@shared/trade/trade-fields.ts';
+import { DESIGN_COL_ID } from './trade-columns';
+
+/** One number filter as AG Grid's agNumberColumnFilter reports it. */
+interface NumberFilterModel {
+  filterType?: string;
+  type?: string;
+  filter?: number | null;
+  filterTo?: number | null;
+}
+
+export interface ViewQuery {
+  sort: { key: string; dir: 'asc' | 'desc' }[];
+  /** Inclusive bounds per server key. */
+  ranges: Record<string, { min?: number; max?: number }>;
+}
+
+function serverKey(colId: string): string | null {
+  if (colId === DESIGN_COL_ID) return 'designIndex';
+  const f = tradeField(colId);
+  return f ? serverKeyOf(f) : null;
+}
+
+export function viewQuery(sortModel: SortModelItem[], filterModel: Record<string, NumberFilterModel> | null | undefined): ViewQuery {
+  const sort = sortModel.flatMap((s) => {
+    const key = serverKey(s.colId);
+    return key ? [{ key, dir: s.sort }] : [];
+  });
+  const ranges: ViewQuery['ranges'] = {};
+  for (const [colId, m] of Object.entries(filterModel ?? {})) {
+    const key = serverKey(colId);
+    if (!key || m.filter === null || m.filter === undefined) continue;
+    if (m.type === 'inRange') ranges[key] = { min: m.filter, ...(m.filterTo != null ? { max: m.filterTo } : {}) };
+    else if (m.type === 'greaterThanOrEqual' || m.type === 'greaterThan') ranges[key] = { min: m.filter };
+    else if (m.type === 'lessThanOrEqual' || m.type === 'lessThan') ranges[key] = { max: m.filter };
+    else if (m.type === 'equals') ranges[key] = { min: m.filter, max: m.filter };
+  }
+  return { sort, ranges };
+}
+
+/**
+ * The results API's syntax (shared/sweep/results-query.ts): `?offset=0&limit=100&sort=edgeEirpDbm:desc`
+ * `&filters={"channels":{"min":4,"max":8}}`. The server sorts by one field, so only the first sort is sent.
+ */
+export function queryString(q: ViewQuery, offset: number, limit: number, extra: Record<string, string | number> = {}): string {
+  const p = new URLSearchParams({ offset: String(offset), limit: String(limit) });
+  const first = q.sort[0];
+  if (first) p.set('sort', `${first.key}:${first.dir}`);
+  const filters = Object.fromEntries(
+    Object.entries(q.ranges).map(([key, r]) => [key, r.min !== undefined && r.min === r.max ? r.min : r]),
+  );
+  if (Object.keys(filters).length) p.set('filters', JSON.stringify(filters));
+  for (const [k, v] of Object.entries(extra)) p.set(k, String(v));
+  return p.toString();
+}
