@@ -1,0 +1,43 @@
+/** Candidates: the list and create under /api/studies/:id/candidates, one candidate under /api/candidates/:id. */
+import { Router, type Request } from 'express';
+import type { AppContext } from '../context.ts';
+import { requireAuth, requireRole } from '../middleware/require-auth.ts';
+import { validate } from '../middleware/validate.ts';
+import { createCandidate, deleteCandidate, getCandidate, listCandidates, patchCandidate } from '../services/candidate-service.ts';
+import {
+  CandidateCreateSchema,
+  CandidatePatchSchema,
+  IdParamsSchema,
+  type CandidateCreate,
+  type CandidatePatch,
+} from '../../shared/schemas/study.ts';
+
+const id = validate({ params: IdParamsSchema });
+const idOf = (req: Request) => String(req.params.id);
+
+/** Mounted by the studies router; mergeParams brings the study's :id. */
+export function studyCandidatesRouter(ctx: AppContext): Router {
+  const router = Router({ mergeParams: true });
+  router.get('/', requireAuth, id, async (req, res) => {
+    res.json(await listCandidates(ctx, req.user!, idOf(req)));
+  });
+  router.post('/', requireRole('engineer'), id, validate({ body: CandidateCreateSchema }), async (req, res) => {
+    res.status(201).json(await createCandidate(ctx, req.user!, idOf(req), req.body as CandidateCreate));
+  });
+  return router;
+}
+
+export function candidatesRouter(ctx: AppContext): Router {
+  const router = Router();
+  router.get('/:id', requireAuth, id, async (req, res) => {
+    res.json(await getCandidate(ctx, req.user!, idOf(req)));
+  });
+  router.patch('/:id', requireRole('engineer'), id, validate({ body: CandidatePatchSchema }), async (req, res) => {
+    res.json(await patchCandidate(ctx, req.user!, idOf(req), req.body as CandidatePatch));
+  });
+  router.delete('/:id', requireRole('engineer'), id, async (req, res) => {
+    await deleteCandidate(ctx, req.user!, idOf(req));
+    res.status(204).end();
+  });
+  return router;
+}

@@ -1,0 +1,72 @@
+/**
+ * /api/studies: the studies list, one study, duplicate, export/import, and the study's candidates and target sheet.
+ * Writes check the engineer role first, so a reviewer hears 403 whatever the body; team and sharing are checked by the service.
+ */
+import { Router, type Request } from 'express';
+import type { AppContext } from '../context.ts';
+import { requireAuth, requireRole } from '../middleware/require-auth.ts';
+import { validate } from '../middleware/validate.ts';
+import {
+  createStudy,
+  deleteStudy,
+  duplicateStudy,
+  exportStudy,
+  getStudy,
+  importStudy,
+  listStudies,
+  patchStudy,
+} from '../services/study-service.ts';
+import {
+  IdParamsSchema,
+  StudyCreateSchema,
+  StudyExportSchema,
+  StudyListQuerySchema,
+  StudyPatchSchema,
+  type StudyCreate,
+  type StudyExport,
+  type StudyPatch,
+} from '../../shared/schemas/study.ts';
+import { studyCandidatesRouter } from './candidates.ts';
+import { studyTargetSheetRouter } from './target-sheets.ts';
+
+const id = validate({ params: IdParamsSchema });
+const idOf = (req: Request) => String(req.params.id);
+
+/** A file name safe in a Content-Disposition header, from the study's name. */
+function exportFileName(name: string): string {
+  const safe = name.replace(/[^\w.-]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 80) || 'study';
+  return `${safe}.lobewise.json`;
+}
+
+export function studiesRouter(ctx: AppContext): Router {
+  const router = Router();
+  router.get('/', requireAuth, validate({ query: StudyListQuerySchema }), async (req, res) => {
+    res.json(await listStudies(ctx, req.user!, req.query as unknown as { archived: boolean }));
+  });
+  router.post('/', requireRole('engineer'), validate({ body: StudyCreateSchema }), async (req, res) => {
+    res.status(201).json(await createStudy(ctx, req.user!, req.body as StudyCreate));
+  });
+  router.post('/import', requireRole('engineer'), validate({ body: StudyExportSchema }), async (req, res) => {
+    res.status(201).json(await importStudy(ctx, req.user!, req.body as StudyExport));
+  });
+  router.get('/:id', requireAuth, id, async (req, res) => {
+    res.json(await getStudy(ctx, req.user!, idOf(req)));
+  });
+  router.patch('/:id', requireRole('engineer'), id, validate({ body: StudyPatchSchema }), async (req, res) => {
+    res.json(await patchStudy(ctx, req.user!, idOf(req), req.body as StudyPatch));
+  });
+  router.delete('/:id', requireRole('engineer'), id, async (req, res) => {
+    await deleteStudy(ctx, req.user!, idOf(req));
+    res.status(204).end();
+  });
+  router.post('/:id/duplicate', requireRole('engineer'), id, async (req, res) => {
+    res.status(201).json(await duplicateStudy(ctx, req.user!, idOf(req)));
+  });
+  router.get('/:id/export', requireAuth, id, async (req, res) => {
+    const file = await exportStudy(ctx, req.user!, idOf(req));
+    res.attachment(exportFileName(file.study.name)).json(file);
+  });
+  router.use('/:id/candidates', studyCandidatesRouter(ctx));
+  router.use('/:id/target-sheet', studyTargetSheetRouter(ctx));
+  return router;
+}

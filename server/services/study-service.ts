@@ -1,0 +1,212 @@
+/**
+ * Studies: the list the caller may see, create, rename, archive, duplicate and delete.
+ * Access (team, role, shares) is decided by study-access; this file only reads and writes rows.
+ */
+import type { EntityManager } from 'typeorm';
+import type { AuthUser } from '../auth/types.ts';
+import type { AppContext } from '../context.ts';
+import { Candidate } from '../entities/candidate.ts';
+import { Study } from '../entities/study.ts';
+import { TargetSheetRow } from '../entities/target-sheet.ts';
+import { findPreset } from '../../shared/targets/presets.ts';
+import {
+  STUDY_EXPORT_FORMAT,
+  STUDY_EXPORT_VERSION,
+  type StudyCreate,
+  type StudyExport,
+  type StudyPatch,
+  type SweepDefinition,
+} from '../../shared/schemas/study.ts';
+import { audit } from './audit-service.ts';
+import { findStudyFor, studyVisibilityWhere } from './study-access.ts';
+
+export interface StudyShareSummary {
+  userId: string;
+  name: string;
+  access: 'editor' | 'viewer';
+}
+
+/** One row of the studies list. */
+export interface StudyListItem {
+  id: string;
+  name: string;
+  description: string;
+  visibility: 'private' | 'team';
+  ownerId: string;
+  ownerName: string;
+  targetSheetPreset: string | null;
+  targetSheetName: string | null;
+  candidateCount: number;
+  sweepCount: number;
+  archivedAt: string | null;
+  createdAt: string;
+  updatedAt: string;
+  sharedWith: StudyShareSummary[];
+}
+
+/** True once the sweeps feature has created its table; before that every study has 0 sweeps. */
+export async function hasTable(db: EntityManager | AppContext['db'], table: string): Promise<boolean> {
+  const rows: { present: boolean }[] = await db.query(`SELECT to_regclass($1) IS NOT NULL AS present`, [`public.${table}`]);
+  return rows[0]?.present === true;
+}
+
+/** The caller's visible studies, newest change first; archived ones only when asked. */
+export async function listStudies(
+  ctx: AppContext,
+  user: AuthUser,
+  options: { archived: boolean; id?: string },
+): Promise<StudyListItem[]> {
+  const sweepCount = (await hasTable(ctx.db, 'sweeps'))
+    ? `(SELECT count(*)::int FROM sweeps sw WHERE sw.study_id = s.id)`
+    : `0`;
+  const [visible, visibleParams] = studyVisibilityWhere(user, 's');
+  const [sql, params] = ctx.db.driver.escapeQueryWithParameters(
+    `SELECT s.id, s.name, s.description, s.visibility, s.owner_id AS "ownerId", u.name AS "ownerName",
+       ts.preset AS "targetSheetPreset", ts.sheet->>'name' AS "targetSheetName",
+       (SELECT count(*)::int FROM candidates c WHERE c.study_id = s.id) AS "candidateCount",
+       ${sweepCount} AS "sweepCount",
+       s.archived_at AS "archivedAt", s.created_at AS "createdAt", s.updated_at AS "updatedAt",
+       COALESCE((SELECT json_agg(json_build_object('userId', su.id, 'name', su.name, 'access', sh.access) ORDER BY su.name)
+         FROM study_shares sh JOIN users su ON su.id = sh.user_id WHERE sh.study_id = s.id), '[]'::json) AS "sharedWith"
+     FROM studies s
+     JOIN users u ON u.id = s.owner_id
+     LEFT JOIN target_sheets ts ON ts.study_id = s.id
+     WHERE ${visible} AND (CAST(:archived AS boolean) OR s.archived_at IS NULL)
+       AND (CAST(:onlyId AS uuid) IS NULL OR s.id = CAST(:onlyId AS uuid))
+     ORDER BY s.updated_at DESC, s.name`,
+    { ...visibleParams, archived: options.archived, onlyId: options.id ?? null },
+    {},
+  );
+  const rows: StudyListItem[] = await ctx.db.query(sql, params);
+  return rows.map((r) => ({
+    ...r,
+    targetSheetName: r.targetSheetName ?? (r.targetSheetPreset ? (findPreset(r.targetSheetPreset)?.name ?? null) : null),
+  }));
+}
+
+/** One study as the list shows it, after checking the caller may read it. */
+export async function getStudy(ctx: AppContext, user: AuthUser, studyId: string): Promise<StudyListItem & { canEdit: boolean }> {
+  await findStudyFor(ctx, user, studyId, 'read');
+  const [item] = await listStudies(ctx, user, { archived: true, id: studyId });
+  // Visible through access but not in the list query would be a bug in one of the two; fail closed.
+  if (!item) throw new Error(`study ${studyId} readable but not listed`);
+  const canEdit = await findStudyFor(ctx, user, studyId, 'edit').then(
+    () => true,
+    () => false,
+  );
+  return { ...item, canEdit };
+}
+
+export async function createStudy(ctx: AppContext, user: AuthUser, input: StudyCreate): Promise<Study> {
+  const repo = ctx.db.getRepository(Study);
+  return repo.save(repo.create({ ...input, teamId: user.teamId, ownerId: user.id, archivedAt: null }));
+}
+
+/** Rename, describe, archive (archived: true) or restore (archived: false). */
+export async function patchStudy(ctx: AppContext, user: AuthUser, studyId: string, patch: StudyPatch): Promise<Study> {
+  const study = await findStudyFor(ctx, user, studyId, 'edit');
+  if (patch.name !== undefined) study.name = patch.name;
+  if (patch.description !== undefined) study.description = patch.description;
+  if (patch.archived !== undefined) study.archivedAt = patch.archived ? (study.archivedAt ?? new Date()) : null;
+  return ctx.db.getRepository(Study).save(study);
+}
+
+/** Deletes the study and, through cascades, its candidates, target sheet, shares and sweeps. Audited. */
+export async function deleteStudy(ctx: AppContext, user: AuthUser, studyId: string): Promise<void> {
+  const study = await findStudyFor(ctx, user, studyId, 'edit');
+  await ctx.db.transaction(async (m) => {
+    await m.getRepository(Study).delete({ id: study.id });
+    await audit(ctx, user, 'study.deleted', { type: 'study', id: study.id }, { name: study.name }, m);
+  });
+}
+
+/** A copy owned by the caller: fields, candidates and target sheet (sweeps are re-run, not copied). */
+export async function duplicateStudy(ctx: AppContext, user: AuthUser, studyId: string): Promise<Study> {
+  const source = await findStudyFor(ctx, user, studyId, 'read');
+  return ctx.db.transaction(async (m) => {
+    const copy = await m.getRepository(Study).save(
+      m.getRepository(Study).create({
+        teamId: user.teamId,
+        ownerId: user.id,
+        name: `${source.name} (copy)`.slice(0, 200),
+        description: source.description,
+        visibility: source.visibility,
+        archivedAt: null,
+      }),
+    );
+    const candidates = await m.getRepository(Candidate).find({ where: { studyId: source.id }, order: { position: 'ASC' } });
+    if (candidates.length > 0) {
+      await m.getRepository(Candidate).insert(
+        candidates.map((c) => ({ studyId: copy.id, name: c.name, design: c.design, notes: c.notes, position: c.position, createdBy: user.id })),
+      );
+    }
+    const sheet = await m.getRepository(TargetSheetRow).findOneBy({ studyId: source.id });
+    if (sheet) await m.getRepository(TargetSheetRow).insert({ studyId: copy.id, preset: sheet.preset, sheet: sheet.sheet });
+    return copy;
+  });
+}
+
+/** Marks the study changed (its candidates or sheet moved), so the list's "last change" is honest. */
+export async function touchStudy(m: EntityManager, studyId: string): Promise<void> {
+  await m.query(`UPDATE studies SET updated_at = now() WHERE id = $1`, [studyId]);
+}
+
+/** Sweep definitions of a study, read without depending on the sweeps feature's column layout. */
+async function sweepDefinitions(m: EntityManager, studyId: string): Promise<SweepDefinition[]> {
+  if (!(await hasTable(m, 'sweeps'))) return [];
+  const rows: { row: Record<string, unknown> }[] = await m.query(
+    `SELECT to_jsonb(sw) AS row FROM sweeps sw WHERE sw.study_id = $1 ORDER BY sw.created_at`,
+    [studyId],
+  );
+  const isObject = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
+  return rows
+    .filter(({ row }) => isObject(row.grid))
+    .map(({ row }) => ({
+      name: String(row.name ?? 'sweep'),
+      grid: row.grid as Record<string, unknown>,
+      constraints: isObject(row.constraints) ? row.constraints : null,
+    }));
+}
+
+/** The whole study as the export file: study fields, candidates, target sheet and sweep definitions. */
+export async function exportStudy(ctx: AppContext, user: AuthUser, studyId: string): Promise<StudyExport> {
+  const study = await findStudyFor(ctx, user, studyId, 'read');
+  const m = ctx.db.manager;
+  const candidates = await m.getRepository(Candidate).find({ where: { studyId }, order: { position: 'ASC', createdAt: 'ASC' } });
+  const sheet = await m.getRepository(TargetSheetRow).findOneBy({ studyId });
+  return {
+    format: STUDY_EXPORT_FORMAT,
+    version: STUDY_EXPORT_VERSION,
+    exportedAt: new Date().toISOString(),
+    study: { name: study.name, description: study.description, visibility: study.visibility },
+    candidates: candidates.map((c) => ({ name: c.name, design: c.design, notes: c.notes })),
+    targetSheet: sheet ? { preset: sheet.preset, sheet: sheet.sheet } : null,
+    sweeps: await sweepDefinitions(m, studyId),
+  };
+}
+
+export interface ImportResult {
+  study: Study;
+  candidateCount: number;
+  /** Carried in the file but not run: results are recomputed by starting them again. */
+  sweeps: SweepDefinition[];
+}
+
+/** Creates a new study owned by the caller from a validated export file, all in one transaction. */
+export async function importStudy(ctx: AppContext, user: AuthUser, file: StudyExport): Promise<ImportResult> {
+  return ctx.db.transaction(async (m) => {
+    const study = await m.getRepository(Study).save(
+      m.getRepository(Study).create({ ...file.study, teamId: user.teamId, ownerId: user.id, archivedAt: null }),
+    );
+    if (file.candidates.length > 0) {
+      await m.getRepository(Candidate).insert(
+        file.candidates.map((c, position) => ({ studyId: study.id, name: c.name, design: c.design, notes: c.notes, position, createdBy: user.id })),
+      );
+    }
+    if (file.targetSheet) {
+      const preset = file.targetSheet.preset && findPreset(file.targetSheet.preset) ? file.targetSheet.preset : null;
+      await m.getRepository(TargetSheetRow).insert({ studyId: study.id, preset, sheet: file.targetSheet.sheet });
+    }
+    return { study, candidateCount: file.candidates.length, sweeps: file.sweeps };
+  });
+}

@@ -1,0 +1,107 @@
+/**
+ * Studies, candidates and the study export file. The same schemas drive the API's validate() middleware,
+ * the client's forms and the import check, so a bad file names the same "field: rule" everywhere.
+ */
+import { z } from 'zod';
+import { TargetSheetSchema } from '../targets/sheet.ts';
+import { DesignSchema } from './design.ts';
+
+const name = z
+  .string({ error: 'must be text of 1 to 200 characters' })
+  .trim()
+  .min(1, 'must be text of 1 to 200 characters')
+  .max(200, 'must be text of 1 to 200 characters');
+const description = z.string({ error: 'must be text' }).max(5000, 'must be at most 5000 characters');
+const notes = z.string({ error: 'must be text' }).max(10_000, 'must be at most 10000 characters');
+const visibility = z.enum(['private', 'team'], { error: 'must be "private" or "team"' });
+
+export const StudyCreateSchema = z
+  .object({ name, description: description.default(''), visibility: visibility.default('team') }, { error: 'must be a study object' })
+  .strict();
+export type StudyCreate = z.output<typeof StudyCreateSchema>;
+
+export const StudyPatchSchema = z
+  .object(
+    { name: name.optional(), description: description.optional(), archived: z.boolean({ error: 'must be true or false' }).optional() },
+    { error: 'must be an object of changes' },
+  )
+  .strict();
+export type StudyPatch = z.output<typeof StudyPatchSchema>;
+
+export const StudyListQuerySchema = z
+  .object({ archived: z.enum(['true', 'false'], { error: 'must be "true" or "false"' }).optional() })
+  .transform((q) => ({ archived: q.archived === 'true' }));
+
+export const IdParamsSchema = z.object({ id: z.uuid({ error: 'must be a uuid' }) });
+
+export const CandidateCreateSchema = z
+  .object({ name, design: DesignSchema, notes: notes.default('') }, { error: 'must be a candidate object' })
+  .strict();
+export type CandidateCreate = z.output<typeof CandidateCreateSchema>;
+
+export const CandidatePatchSchema = z
+  .object(
+    {
+      name: name.optional(),
+      design: DesignSchema.optional(),
+      notes: notes.optional(),
+      position: z.int({ error: 'must be an integer' }).min(0, 'must be an integer of at least 0').optional(),
+    },
+    { error: 'must be an object of changes' },
+  )
+  .strict();
+export type CandidatePatch = z.output<typeof CandidatePatchSchema>;
+
+export const TargetSheetPutSchema = z
+  .object(
+    { preset: z.string({ error: 'must be a preset id or null' }).max(100).nullable().default(null), sheet: TargetSheetSchema },
+    { error: 'must be {preset, sheet}' },
+  )
+  .strict();
+export type TargetSheetPut = z.output<typeof TargetSheetPutSchema>;
+
+/** A sweep as it travels in an export: its definition only (results are recomputed, never carried). */
+export const SweepDefinitionSchema = z
+  .object(
+    {
+      name,
+      grid: z.record(z.string(), z.unknown(), { error: 'must be an object of design fields' }),
+      constraints: z.record(z.string(), z.unknown(), { error: 'must be an object' }).nullable().optional(),
+    },
+    { error: 'must be a sweep definition {name, grid, constraints?}' },
+  )
+  .strict();
+export type SweepDefinition = z.output<typeof SweepDefinitionSchema>;
+
+export const STUDY_EXPORT_FORMAT = 'lobewise-study';
+export const STUDY_EXPORT_VERSION = 1;
+
+/** A whole study as one JSON file: its fields, candidates, target sheet and sweep definitions. */
+export const StudyExportSchema = z
+  .object(
+    {
+      format: z.literal(STUDY_EXPORT_FORMAT, { error: `must be "${STUDY_EXPORT_FORMAT}"` }),
+      version: z.literal(STUDY_EXPORT_VERSION, { error: `must be ${STUDY_EXPORT_VERSION}` }),
+      exportedAt: z.string({ error: 'must be a date-time text' }).optional(),
+      study: z
+        .object({ name, description: description.default(''), visibility: visibility.default('team') }, { error: 'must be a study object' })
+        .strip(),
+      candidates: z
+        .array(
+          z.object({ name, design: DesignSchema, notes: notes.default('') }, { error: 'must be a candidate object' }).strip(),
+          { error: 'must be a list of candidates' },
+        )
+        .max(500, 'must hold at most 500 candidates')
+        .default([]),
+      targetSheet: z
+        .object({ preset: z.string().max(100).nullable().default(null), sheet: TargetSheetSchema }, { error: 'must be {preset, sheet} or null' })
+        .strip()
+        .nullable()
+        .default(null),
+      sweeps: z.array(SweepDefinitionSchema, { error: 'must be a list of sweep definitions' }).max(200).default([]),
+    },
+    { error: 'must be a Lobewise study file (a JSON object)' },
+  )
+  .strip();
+export type StudyExport = z.output<typeof StudyExportSchema>;
+export type StudyExportInput = z.input<typeof StudyExportSchema>;

@@ -1,0 +1,114 @@
+/**
+ * The target sheet: the requirements a design must meet. Every limit is optional (absent or null = not required),
+ * so a study can start with an empty sheet and tighten it as the requirements firm up.
+ */
+import { z } from 'zod';
+
+const num = (rule: string) => z.number({ error: rule }).nullable().optional();
+const positive = (unit: string) =>
+  z
+    .number({ error: `must be a number greater than 0 (${unit})` })
+    .positive(`must be a number greater than 0 (${unit})`)
+    .nullable()
+    .optional();
+
+const angle = z
+  .number({ error: 'must be a number from -90 to 90 (degrees)' })
+  .min(-90, 'must be a number from -90 to 90 (degrees)')
+  .max(90, 'must be a number from -90 to 90 (degrees)');
+
+/** A closed scan interval in degrees; min must not exceed max. */
+const ScanRangeSchema = z
+  .object({ min: angle, max: angle }, { error: 'must be a range {min, max} in degrees' })
+  .strict()
+  .refine((r) => r.min <= r.max, { message: 'min must not exceed max', path: ['min'] });
+
+const width = z
+  .number({ error: 'must be a number from 0 to 180 (degrees)' })
+  .min(0, 'must be a number from 0 to 180 (degrees)')
+  .max(180, 'must be a number from 0 to 180 (degrees)')
+  .nullable()
+  .optional();
+
+/** HPBW limits in degrees; either end may be open. */
+const WidthRangeSchema = z
+  .object({ min: width, max: width }, { error: 'must be a range {min?, max?} in degrees' })
+  .strict()
+  .refine((r) => r.min == null || r.max == null || r.min <= r.max, { message: 'min must not exceed max', path: ['min'] });
+
+export const TargetSheetSchema = z
+  .object(
+    {
+      name: z.string({ error: 'must be text' }).trim().max(200, 'must be at most 200 characters').optional(),
+      maxApertureXMm: positive('mm'),
+      maxApertureYMm: positive('mm'),
+      maxChannels: z
+        .int({ error: 'must be an integer of at least 1 (channels)' })
+        .min(1, 'must be an integer of at least 1 (channels)')
+        .nullable()
+        .optional(),
+      scanAzDeg: ScanRangeSchema.nullable().optional(),
+      scanElDeg: ScanRangeSchema.nullable().optional(),
+      minPeakEirpDbm: num('must be a number (dBm)'),
+      minEdgeEirpDbm: num('must be a number (dBm)'),
+      maxScanLossDb: z
+        .number({ error: 'must be a number of at least 0 (dB)' })
+        .min(0, 'must be a number of at least 0 (dB)')
+        .nullable()
+        .optional(),
+      hpbwAzDeg: WidthRangeSchema.nullable().optional(),
+      hpbwElDeg: WidthRangeSchema.nullable().optional(),
+      maxSllDb: z
+        .number({ error: 'must be a number of at most 0 (dB relative to the peak, e.g. -13)' })
+        .max(0, 'must be a number of at most 0 (dB relative to the peak, e.g. -13)')
+        .nullable()
+        .optional(),
+      noGratingLobeInScan: z.boolean({ error: 'must be true or false' }).nullable().optional(),
+      maxPointingErrorDeg: z
+        .number({ error: 'must be a number of at least 0 (degrees)' })
+        .min(0, 'must be a number of at least 0 (degrees)')
+        .nullable()
+        .optional(),
+    },
+    { error: 'must be a target sheet object' },
+  )
+  .strict();
+
+export type TargetSheet = z.output<typeof TargetSheetSchema>;
+export type TargetSheetInput = z.input<typeof TargetSheetSchema>;
+export type ScanRange = { min: number; max: number };
+
+/** The limit keys, in the order the editor and the pass/fail list show them. */
+export const LIMIT_KEYS = [
+  'maxApertureXMm',
+  'maxApertureYMm',
+  'maxChannels',
+  'scanAzDeg',
+  'scanElDeg',
+  'minPeakEirpDbm',
+  'minEdgeEirpDbm',
+  'maxScanLossDb',
+  'hpbwAzDeg',
+  'hpbwElDeg',
+  'maxSllDb',
+  'noGratingLobeInScan',
+  'maxPointingErrorDeg',
+] as const;
+export type LimitKey = (typeof LIMIT_KEYS)[number];
+
+/** Human labels with units, shared by the editor, the pass/fail list and the trade table headers. */
+export const LIMIT_LABELS: Record<LimitKey, string> = {
+  maxApertureXMm: 'Max aperture x (mm)',
+  maxApertureYMm: 'Max aperture y (mm)',
+  maxChannels: 'Max channels',
+  scanAzDeg: 'Scan range az (°)',
+  scanElDeg: 'Scan range el (°)',
+  minPeakEirpDbm: 'Min peak EIRP (dBm)',
+  minEdgeEirpDbm: 'Min EIRP at edge of scan (dBm)',
+  maxScanLossDb: 'Max scan loss (dB)',
+  hpbwAzDeg: 'HPBW az (°)',
+  hpbwElDeg: 'HPBW el (°)',
+  maxSllDb: 'Max side-lobe level (dB)',
+  noGratingLobeInScan: 'No grating lobe in scan',
+  maxPointingErrorDeg: 'Max pointing error (°)',
+};

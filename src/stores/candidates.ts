@@ -1,0 +1,118 @@
+/**
+ * Candidates of the open study, which of them is being edited, and which are picked to overlay their cuts.
+ * Saving a design is explicit (the editor saves after a pause); renames and deletes are optimistic.
+ */
+import { defineStore } from 'pinia';
+import { computed, ref } from 'vue';
+import { api } from '@/api/client';
+import type { DesignInput } from '@shared/schemas/design.ts';
+import { errorText } from './studies';
+
+export interface CandidateRow {
+  id: string;
+  studyId: string;
+  name: string;
+  design: DesignInput;
+  notes: string;
+  position: number;
+  createdAt: string;
+  updatedAt: string;
+}
+
+/** A first candidate that evaluates at once: a 4-element 28 GHz row at half a wavelength. */
+export const STARTER_DESIGN: DesignInput = {
+  frequencyGHz: 28,
+  nx: 4,
+  ny: 1,
+  dxMm: 5.35,
+  taperX: { kind: 'uniform' },
+  taperY: { kind: 'uniform' },
+  phaseBits: 6,
+  grouping: 'element',
+  element: { kind: 'cosine', q: 1.5 },
+  steerAzDeg: 0,
+  steerElDeg: 0,
+  channelPowerDbm: 10,
+};
+
+export const useCandidatesStore = defineStore('candidates', () => {
+  const studyId = ref<string | null>(null);
+  const list = ref<CandidateRow[]>([]);
+  const loading = ref(false);
+  const error = ref<string | null>(null);
+  const selectedId = ref<string | null>(null);
+  /** Candidates picked for the overlay of cuts. */
+  const overlayIds = ref<string[]>([]);
+
+  const selected = computed(() => list.value.find((c) => c.id === selectedId.value) ?? null);
+  const overlay = computed(() => list.value.filter((c) => overlayIds.value.includes(c.id)));
+
+  async function load(id: string): Promise<void> {
+    if (studyId.value !== id) {
+      list.value = [];
+      selectedId.value = null;
+      overlayIds.value = [];
+    }
+    studyId.value = id;
+    loading.value = true;
+    error.value = null;
+    try {
+      list.value = await api.get<CandidateRow[]>(`/api/studies/${id}/candidates`);
+      if (!selected.value) selectedId.value = list.value[0]?.id ?? null;
+    } catch (err) {
+      error.value = errorText(err);
+    } finally {
+      loading.value = false;
+    }
+  }
+
+  async function create(name: string, design: DesignInput = STARTER_DESIGN): Promise<CandidateRow> {
+    if (!studyId.value) throw new Error('no study is open');
+    const created = await api.post<CandidateRow>(`/api/studies/${studyId.value}/candidates`, { name, design });
+    list.value.push(created);
+    selectedId.value = created.id;
+    return created;
+  }
+
+  async function saveDesign(id: string, design: DesignInput): Promise<CandidateRow> {
+    const saved = await api.patch<CandidateRow>(`/api/candidates/${id}`, { design });
+    const row = list.value.find((c) => c.id === id);
+    if (row) Object.assign(row, saved);
+    return saved;
+  }
+
+  async function rename(id: string, name: string): Promise<void> {
+    const row = list.value.find((c) => c.id === id);
+    const before = row?.name;
+    if (row) row.name = name;
+    try {
+      await api.patch(`/api/candidates/${id}`, { name });
+    } catch (err) {
+      if (row && before !== undefined) row.name = before;
+      throw err;
+    }
+  }
+
+  async function remove(id: string): Promise<void> {
+    const index = list.value.findIndex((c) => c.id === id);
+    const removed = index >= 0 ? list.value.splice(index, 1)[0] : undefined;
+    try {
+      await api.delete(`/api/candidates/${id}`);
+      overlayIds.value = overlayIds.value.filter((x) => x !== id);
+      if (selectedId.value === id) selectedId.value = list.value[0]?.id ?? null;
+    } catch (err) {
+      if (removed) list.value.splice(index, 0, removed);
+      throw err;
+    }
+  }
+
+  function select(id: string): void {
+    selectedId.value = id;
+  }
+
+  function toggleOverlay(id: string): void {
+    overlayIds.value = overlayIds.value.includes(id) ? overlayIds.value.filter((x) => x !== id) : [...overlayIds.value, id];
+  }
+
+  return { studyId, list, loading, error, selectedId, selected, overlayIds, overlay, load, create, saveDesign, rename, remove, select, toggleOverlay };
+});

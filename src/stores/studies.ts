@@ -1,0 +1,165 @@
+/**
+ * Studies: the list the signed-in member sees, the open study, its target sheet and the presets.
+ * Edits to the list are optimistic and roll back when the server refuses.
+ */
+import { defineStore } from 'pinia';
+import { computed, ref } from 'vue';
+import { api, ApiRequestError } from '@/api/client';
+import type { StudyCreate, StudyExport } from '@shared/schemas/study.ts';
+import type { TargetPreset, TargetSheet } from '@shared/targets/index.ts';
+
+export interface StudyShareSummary {
+  userId: string;
+  name: string;
+  access: 'editor' | 'viewer';
+}
+
+export interface StudyRow {
+  id: string;
+  name: string;
+  description: string;
+  visibility: 'private' | 'team';
+  ownerId: string;
+  ownerName: string;
+  targetSheetPreset: string | null;
+  targetSheetName: string | null;
+  candidateCount: number;
+  sweepCount: number;
+  archivedAt: string | null;
+  createdAt: string;
+  updatedAt: string;
+  sharedWith: StudyShareSummary[];
+  canEdit?: boolean;
+}
+
+export interface TargetSheetState {
+  studyId: string;
+  preset: string | null;
+  presetName: string | null;
+  sheet: TargetSheet;
+  updatedAt: string | null;
+}
+
+export interface ImportOutcome {
+  study: { id: string; name: string };
+  candidateCount: number;
+  sweeps: { name: string }[];
+}
+
+/** The message to show for a failure; every caller shows server messages as they come ("field: rule"). */
+export function errorText(err: unknown): string {
+  return err instanceof ApiRequestError || err instanceof Error ? err.message : String(err);
+}
+
+export const useStudiesStore = defineStore('studies', () => {
+  const list = ref<StudyRow[]>([]);
+  const loading = ref(false);
+  const loaded = ref(false);
+  const error = ref<string | null>(null);
+  const showArchived = ref(false);
+  const current = ref<StudyRow | null>(null);
+  const targetSheet = ref<TargetSheetState | null>(null);
+  const presets = ref<TargetPreset[]>([]);
+
+  const visible = computed(() => list.value.filter((s) => showArchived.value || !s.archivedAt));
+
+  async function fetchList(): Promise<void> {
+    loading.value = true;
+    error.value = null;
+    try {
+      list.value = await api.get<StudyRow[]>(`/api/studies${showArchived.value ? '?archived=true' : ''}`);
+      loaded.value = true;
+    } catch (err) {
+      error.value = errorText(err);
+    } finally {
+      loading.value = false;
+    }
+  }
+
+  async function create(input: Partial<StudyCreate> & { name: string }): Promise<StudyRow> {
+    const created = await api.post<StudyRow>('/api/studies', input);
+    await fetchList();
+    return list.value.find((s) => s.id === created.id) ?? created;
+  }
+
+  /** Applies `change` locally, sends it, and restores the row if the server refuses. */
+  async function patch(id: string, change: { name?: string; description?: string; archived?: boolean }): Promise<void> {
+    const row = list.value.find((s) => s.id === id);
+    const before = row ? { ...row } : null;
+    if (row) {
+      if (change.name !== undefined) row.name = change.name;
+      if (change.archived !== undefined) row.archivedAt = change.archived ? new Date().toISOString() : null;
+    }
+    try {
+      const saved = await api.patch<{ updatedAt: string; archivedAt: string | null; name: string }>(`/api/studies/${id}`, change);
+      if (row) Object.assign(row, { name: saved.name, archivedAt: saved.archivedAt, updatedAt: saved.updatedAt });
+      if (current.value?.id === id) Object.assign(current.value, { name: saved.name, archivedAt: saved.archivedAt });
+    } catch (err) {
+      if (row && before) Object.assign(row, before);
+      throw err;
+    }
+  }
+
+  async function duplicate(id: string): Promise<void> {
+    await api.post(`/api/studies/${id}/duplicate`);
+    await fetchList();
+  }
+
+  async function remove(id: string): Promise<void> {
+    const index = list.value.findIndex((s) => s.id === id);
+    const removed = index >= 0 ? list.value.splice(index, 1)[0] : undefined;
+    try {
+      await api.delete(`/api/studies/${id}`);
+    } catch (err) {
+      if (removed) list.value.splice(index, 0, removed);
+      throw err;
+    }
+  }
+
+  async function exportFile(id: string): Promise<{ fileName: string; text: string }> {
+    const file = await api.get<StudyExport>(`/api/studies/${id}/export`);
+    const base = file.study.name.replace(/[^\w.-]+/g, '-').replace(/^-+|-+$/g, '') || 'study';
+    return { fileName: `${base}.lobewise.json`, text: JSON.stringify(file, null, 2) };
+  }
+
+  /** Imports a study file's text; a file that is not JSON fails here naming the file, a bad field fails on the server. */
+  async function importText(text: string): Promise<ImportOutcome> {
+    let body: unknown;
+    try {
+      body = JSON.parse(text);
+    } catch {
+      throw new ApiRequestError(400, 'invalid_json', 'file: is not valid JSON', [{ field: 'file', message: 'is not valid JSON' }]);
+    }
+    const outcome = await api.post<ImportOutcome>('/api/studies/import', body);
+    await fetchList();
+    return outcome;
+  }
+
+  async function open(id: string): Promise<void> {
+    if (current.value?.id !== id) {
+      current.value = null;
+      targetSheet.value = null;
+    }
+    current.value = await api.get<StudyRow>(`/api/studies/${id}`);
+  }
+
+  async function loadTargetSheet(studyId: string): Promise<TargetSheetState> {
+    targetSheet.value = await api.get<TargetSheetState>(`/api/studies/${studyId}/target-sheet`);
+    return targetSheet.value;
+  }
+
+  async function saveTargetSheet(studyId: string, preset: string | null, sheet: TargetSheet): Promise<TargetSheetState> {
+    targetSheet.value = await api.put<TargetSheetState>(`/api/studies/${studyId}/target-sheet`, { preset, sheet });
+    return targetSheet.value;
+  }
+
+  async function loadPresets(): Promise<TargetPreset[]> {
+    if (presets.value.length === 0) presets.value = await api.get<TargetPreset[]>('/api/target-presets');
+    return presets.value;
+  }
+
+  return {
+    list, visible, loading, loaded, error, showArchived, current, targetSheet, presets,
+    fetchList, create, patch, duplicate, remove, exportFile, importText, open, loadTargetSheet, saveTargetSheet, loadPresets,
+  };
+});
