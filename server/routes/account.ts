@@ -1,0 +1,33 @@
+import { Router } from 'express';
+import { ApiTokenBody, PasswordChangeBody, ProfileBody, TokenIdParams } from '../auth/schemas.ts';
+import type { AppContext } from '../context.ts';
+import { requireAuth, userOf } from '../middleware/require-auth.ts';
+import { validate } from '../middleware/validate.ts';
+import { createToken, listTokens, revokeToken } from '../services/api-token-service.ts';
+import { changePassword, updateProfile } from '../services/user-service.ts';
+import { meOf } from './me.ts';
+
+/** /api/account: your own name, password and personal API tokens. */
+export function accountRouter(ctx: AppContext): Router {
+  const router = Router();
+  router.patch('/', requireAuth, validate({ body: ProfileBody }), async (req, res) => {
+    const user = await updateProfile(ctx, userOf(req), (req.body as { name: string }).name);
+    res.json(await meOf(ctx, user));
+  });
+  router.put('/password', requireAuth, validate({ body: PasswordChangeBody }), async (req, res) => {
+    const body = req.body as { currentPassword: string; newPassword: string };
+    await changePassword(ctx, userOf(req), body.currentPassword, body.newPassword, req.sessionID);
+    res.status(204).end();
+  });
+  router.get('/tokens', requireAuth, async (req, res) => {
+    res.json(await listTokens(ctx, userOf(req)));
+  });
+  router.post('/tokens', requireAuth, validate({ body: ApiTokenBody }), async (req, res) => {
+    res.status(201).json(await createToken(ctx, userOf(req), (req.body as { name: string }).name));
+  });
+  router.delete('/tokens/:tokenId', requireAuth, validate({ params: TokenIdParams }), async (req, res) => {
+    await revokeToken(ctx, userOf(req), req.params.tokenId as string);
+    res.status(204).end();
+  });
+  return router;
+}
