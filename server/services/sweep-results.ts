@@ -1,0 +1,81 @@
+/**
+ * Reading a sweep's stored results: paged, sorted and filtered points and design rows, and the CSV export
+ * (batched keyset reads by point index, written as they come, so memory stays flat at any size).
+ */
+import type { Writable } from 'node:stream';
+import { DESIGN_COLUMNS, POINT_COLUMNS, type ColumnDef } from '../../shared/sweep/columns.ts';
+import type { ResultsQuery } from '../../shared/sweep/results-query.ts';
+import type { AppContext } from '../context.ts';
+import type { Sweep } from '../entities/sweep.ts';
+import { buildQuery } from './sweep-query.ts';
+
+export interface PointRow {
+  index: number;
+  designIndex: number;
+  angleIndex: number;
+  design: Record<string, unknown>;
+  metrics: Record<string, unknown> | null;
+  error: string | null;
+}
+
+export interface Page<T> {
+  total: number;
+  rows: T[];
+}
+
+export async function listPoints(ctx: AppContext, sweep: Sweep, q: ResultsQuery): Promise<Page<PointRow>> {
+  const { where, order, params } = buildQuery(sweep.id, q, POINT_COLUMNS, 'point_index');
+  const [{ total }] = (await ctx.db.query(`SELECT count(*)::int AS total FROM sweep_points WHERE ${where}`, params)) as [{ total: number }];
+  const rows = (await ctx.db.query(
+    `SELECT point_index AS index, design_index AS "designIndex", angle_index AS "angleIndex", design, metrics, error
+     FROM sweep_points WHERE ${where} ORDER BY ${order} LIMIT ${q.limit} OFFSET ${q.offset}`,
+    params,
+  )) as PointRow[];
+  return { total, rows };
+}
+
+export type DesignRow = Record<string, unknown> & { designIndex: number; design: Record<string, unknown> };
+
+const select = (cols: ColumnDef[]) => cols.map((c) => `${c.column} AS "${c.field}"`).join(', ');
+
+export async function listDesigns(ctx: AppContext, sweep: Sweep, q: ResultsQuery): Promise<Page<DesignRow>> {
+  const { where, order, params } = buildQuery(sweep.id, q, DESIGN_COLUMNS, 'design_index');
+  const [{ total }] = (await ctx.db.query(`SELECT count(*)::int AS total FROM sweep_designs WHERE ${where}`, params)) as [{ total: number }];
+  const rows = (await ctx.db.query(
+    `SELECT ${select(DESIGN_COLUMNS)}, design FROM sweep_designs WHERE ${where} ORDER BY ${order} LIMIT ${q.limit} OFFSET ${q.offset}`,
+    params,
+  )) as DesignRow[];
+  return { total, rows };
+}
+
+const CSV_BATCH = 2000;
+
+function csvCell(v: unknown): string {
+  if (v === null || v === undefined) return '';
+  const s = typeof v === 'object' ? JSON.stringify(v) : String(v);
+  return /[",\n\r]/.test(s) ? `"${s.replaceAll('"', '""')}"` : s;
+}
+
+/** Writes every point of the sweep as CSV (parameters, metrics, codes, error) to `out`, honouring back-pressure. */
+export async function writePointsCsv(ctx: AppContext, sweep: Sweep, out: Writable): Promise<void> {
+  const header = [...POINT_COLUMNS.map((c) => c.field), 'codes', 'error'];
+  const write = async (text: string) => {
+    if (!out.write(text)) await new Promise<void>((resolve, reject) => {
+      out.once('drain', resolve);
+      out.once('close', () => reject(new Error('client went away')));
+    });
+  };
+  await write(header.join(',') + '\n');
+  let after = -1;
+  for (;;) {
+    const rows = (await ctx.db.query(
+      `SELECT ${select(POINT_COLUMNS)}, metrics->'codes' AS codes, error FROM sweep_points
+       WHERE sweep_id = $1 AND point_index > $2 ORDER BY point_index LIMIT ${CSV_BATCH}`,
+      [sweep.id, after],
+    )) as Record<string, unknown>[];
+    if (rows.length === 0) break;
+    await write(rows.map((r) => header.map((h) => csvCell(r[h])).join(',')).join('\n') + '\n');
+    after = rows[rows.length - 1]!.index as number;
+    if (rows.length < CSV_BATCH) break;
+  }
+}

@@ -1,0 +1,44 @@
+/** Turns evaluated points into rows of sweep_points and sweep_designs (snake_case keys, as the tables). */
+import type { Design } from '../../shared/schemas/design.ts';
+import type { PointResult } from '../../shared/sweep/chunk.ts';
+import { DESIGN_PARAM_COLUMNS, DESIGN_SUMMARY_COLUMNS, METRIC_COLUMNS, STEER_COLUMNS, paramValue } from '../../shared/sweep/columns.ts';
+import { summariseDesign } from '../../shared/sweep/design-summary.ts';
+
+type Row = Record<string, unknown>;
+
+/** Numbers that JSON cannot carry (NaN, ±Infinity) are stored as null rather than failing the batch. */
+const finite = (v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? null : v);
+
+function params(design: Record<string, unknown>, row: Row): void {
+  for (const c of DESIGN_PARAM_COLUMNS) row[c.column] = finite(paramValue(design as Design, c.field));
+}
+
+export function pointRow(sweepId: string, p: PointResult): Row {
+  const row: Row = { sweep_id: sweepId, point_index: p.index, design_index: p.designIndex, angle_index: p.angleIndex };
+  params(p.design, row);
+  for (const c of STEER_COLUMNS) row[c.column] = finite(p.design[c.field] ?? null);
+  row.design = p.design;
+  for (const c of METRIC_COLUMNS) row[c.column] = p.metrics ? finite(p.metrics[c.field] ?? null) : null;
+  row.metrics = p.metrics;
+  row.error = p.error;
+  return row;
+}
+
+/** One row per design whose points are all in `points` (chunks hold whole designs). */
+export function designRows(sweepId: string, points: PointResult[]): Row[] {
+  const byDesign = new Map<number, PointResult[]>();
+  for (const p of points) {
+    const list = byDesign.get(p.designIndex);
+    if (list) list.push(p);
+    else byDesign.set(p.designIndex, [p]);
+  }
+  return [...byDesign].map(([designIndex, list]) => {
+    const first = list[0]!;
+    const { steerAzDeg: _az, steerElDeg: _el, ...design } = first.design;
+    const row: Row = { sweep_id: sweepId, design_index: designIndex, design };
+    params(first.design, row);
+    const summary = summariseDesign(list);
+    for (const c of DESIGN_SUMMARY_COLUMNS) row[c.column] = finite(summary[c.field] ?? null);
+    return row;
+  });
+}
