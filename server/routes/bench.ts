@@ -1,0 +1,69 @@
+/** Bench codes, calibration, manual codes, beam squint and error tolerance, all under /api/candidates/:id. */
+import { Router, type Request, type RequestHandler } from 'express';
+import type { AppContext } from '../context.ts';
+import { singleUpload } from '../bench/upload.ts';
+import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts';
+import { validate } from '../middleware/validate.ts';
+import {
+  calibrationFromFile,
+  codesCsvFor,
+  codesFor,
+  getCalibration,
+  manualCodes,
+  monteCarloFor,
+  putCalibration,
+  squintFor,
+} from '../services/bench-service.ts';
+import {
+  CalibrationPutSchema,
+  CodesCsvQuerySchema,
+  CodesRequestSchema,
+  ManualCodesRequestSchema,
+  SquintRequestSchema,
+  type CodesCsvQuery,
+  type CodesRequest,
+  type ManualCodesRequest,
+  type SquintRequest,
+} from '../../shared/bench/api-schemas.ts';
+import type { Calibration } from '../../shared/bench/calibration.ts';
+import { MonteCarloOptionsSchema, type MonteCarloOptions } from '../../shared/bench/monte-carlo-schema.ts';
+import { IdParamsSchema } from '../../shared/schemas/study.ts';
+
+const id = validate({ params: IdParamsSchema });
+const idOf = (req: Request) => String(req.params.id);
+
+/** A CSV file upload skips the JSON body check; the service parses the file instead. */
+const unlessFile =
+  (check: RequestHandler): RequestHandler =>
+  (req, res, next) =>
+    req.file ? next() : check(req, res, next);
+
+export function benchRouter(ctx: AppContext): Router {
+  const router = Router();
+  const upload = singleUpload(ctx.config.UPLOAD_LIMIT_BYTES);
+
+  router.post('/candidates/:id/codes', requireAuth, id, validate({ body: CodesRequestSchema }), async (req, res) => {
+    res.json(await codesFor(ctx, userOf(req), idOf(req), req.body as CodesRequest));
+  });
+  router.get('/candidates/:id/codes.csv', requireAuth, id, validate({ query: CodesCsvQuerySchema }), async (req, res) => {
+    const { csv, filename } = await codesCsvFor(ctx, userOf(req), idOf(req), req.query as unknown as CodesCsvQuery);
+    res.type('text/csv').attachment(filename).send(csv);
+  });
+  router.get('/candidates/:id/calibration', requireAuth, id, async (req, res) => {
+    res.json(await getCalibration(ctx, userOf(req), idOf(req)));
+  });
+  router.put('/candidates/:id/calibration', requireRole('engineer'), id, upload, unlessFile(validate({ body: CalibrationPutSchema })), async (req, res) => {
+    const offsets = req.file ? calibrationFromFile(req.file.buffer) : (req.body as { offsets: Calibration }).offsets;
+    res.json(await putCalibration(ctx, userOf(req), idOf(req), offsets, req.file?.originalname ?? null));
+  });
+  router.post('/candidates/:id/manual-codes', requireAuth, id, validate({ body: ManualCodesRequestSchema }), async (req, res) => {
+    res.json(await manualCodes(ctx, userOf(req), idOf(req), req.body as ManualCodesRequest));
+  });
+  router.post('/candidates/:id/squint', requireAuth, id, validate({ body: SquintRequestSchema }), async (req, res) => {
+    res.json(await squintFor(ctx, userOf(req), idOf(req), req.body as SquintRequest));
+  });
+  router.post('/candidates/:id/monte-carlo', requireAuth, id, validate({ body: MonteCarloOptionsSchema }), async (req, res) => {
+    res.json(await monteCarloFor(ctx, userOf(req), idOf(req), req.body as MonteCarloOptions));
+  });
+  return router;
+}
