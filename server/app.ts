@@ -9,6 +9,7 @@ import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import type { AppContext } from './context.ts';
 import { errorHandler } from './middleware/error-handler.ts';
+import { authKit } from './auth/kit.ts';
 import { apiRouter } from './routes/index.ts';
 
 export interface AppOptions {
@@ -35,6 +36,8 @@ export function createApp(ctx: AppContext, options: AppOptions = {}): Express {
   );
   app.use(pinoHttp({ logger: ctx.log, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
   app.use(express.json({ limit: ctx.config.BODY_LIMIT }));
+  // Session, passport, API tokens and CSRF, before any API route.
+  app.use('/api', authKit(ctx).middleware);
   app.use('/api', apiRouter(ctx));
 
   const clientDir = options.clientDir;

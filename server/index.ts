@@ -9,7 +9,9 @@ import { loadConfig, type Config } from './config.ts';
 import type { AppContext } from './context.ts';
 import { openDatabase, type Database } from './db/database.ts';
 import { createLogger } from './logger.ts';
+import { openMail } from './mail/index.ts';
 import { seedDemo } from './seed/index.ts';
+import { startSweepRunner } from './sweeps/runner.ts';
 
 export interface RunningServer {
   url: string;
@@ -24,10 +26,18 @@ export async function startServer(
 ): Promise<RunningServer> {
   const log = createLogger(config);
   const database = await openDatabase(config, (m) => log.info(m));
-  const ctx: AppContext = { config, db: database.db, log };
+  // Without SMTP_URL this starts the local fake SMTP server, which keeps its mail in the database.
+  const mail = await openMail(config, database.db, log).catch(async (err: unknown) => {
+    await database.close();
+    throw err;
+  });
+  const ctx: AppContext = { config, db: database.db, log, mailer: mail.mailer };
   try {
+    ctx.sweeps = await startSweepRunner({ db: database.db, url: database.url, log, threads: config.SWEEP_THREADS, embedded: true, recoverEverySeconds: config.SWEEP_RECOVERY_SECONDS });
     if (config.SEED_DEMO) await seedDemo(ctx);
   } catch (err) {
+    await ctx.sweeps?.stop();
+    await mail.close();
     await database.close();
     throw err;
   }
@@ -47,6 +57,8 @@ export async function startServer(
         // Server-sent event streams never end on their own.
         server.closeAllConnections();
       });
+      await ctx.sweeps?.stop();
+      await mail.close();
       await database.close();
     })());
   return { url, ctx, database, close };

@@ -3,6 +3,15 @@ import { Study } from './study.ts';
 import { StudyShare } from './study-share.ts';
 import { Team } from './team.ts';
 import { User } from './user.ts';
+import { accountEntities } from './accounts.ts';
+import { Candidate } from './candidate.ts';
+import { TargetSheetRow } from './target-sheet.ts';
+import { Comment } from './comment.ts';
+import { ReviewRequest } from './review-request.ts';
+import { Decision } from './decision.ts';
+import { Sweep } from './sweep.ts';
+import { Calibration } from './calibration.ts';
+import { RangeUpload } from './range-upload.ts';
 
 export { Study, StudyShare, Team, User };
-export const entities = [Team, User, Study, StudyShare];
+export const entities = [Team, User, Study, StudyShare, ...accountEntities, Candidate, TargetSheetRow, Comment, ReviewRequest, Decision, Sweep, Calibration, RangeUpload];
