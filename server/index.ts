@@ -5,6 +5,7 @@
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { createApp } from './app.ts';
+import { destroyMonteCarloPool } from './bench/monte-carlo-pool.ts';
 import { loadConfig, type Config } from './config.ts';
 import type { AppContext } from './context.ts';
 import { openDatabase, type Database } from './db/database.ts';
@@ -58,6 +59,7 @@ export async function startServer(
         server.closeAllConnections();
       });
       await ctx.sweeps?.stop();
+      await destroyMonteCarloPool();
       await mail.close();
       await database.close();
     })());

@@ -1,7 +1,7 @@
-import type { RequestHandler } from 'express';
+import type { Request, RequestHandler } from 'express';
 import type { z } from 'zod';
 import { issueFields } from '../../shared/schemas/format-issue.ts';
-import { invalidInput } from '../errors.ts';
+import { ApiError, invalidInput } from '../errors.ts';
 
 interface Schemas {
   body?: z.ZodType;
@@ -10,11 +10,26 @@ interface Schemas {
 }
 
 /**
+ * A body nobody parsed (text/plain, or multipart on a JSON route) would otherwise read as `{}` and slip
+ * through schemas whose fields are all optional; refuse it instead of acting on an empty request.
+ */
+function unparsedBody(req: Request): ApiError | null {
+  const hasBody = Number(req.headers['content-length'] ?? 0) > 0 || req.headers['transfer-encoding'] !== undefined;
+  if (!hasBody || req.body !== undefined) return null;
+  const message = 'must be sent as application/json';
+  return new ApiError(415, 'unsupported_media_type', `body: ${message}`, [{ field: 'body', message }]);
+}
+
+/**
  * Parses body, query and params with the shared zod schemas and replaces them with the parsed values.
  * Fails with one 400 listing every issue; `message` names the first as "field: rule".
  */
 export function validate(schemas: Schemas): RequestHandler {
   return (req, _res, next) => {
+    if (schemas.body) {
+      const refused = unparsedBody(req);
+      if (refused) return next(refused);
+    }
     const fields = [];
     for (const part of ['params', 'query', 'body'] as const) {
       const schema = schemas[part];

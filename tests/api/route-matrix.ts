@@ -71,8 +71,11 @@ export const fixtures: Fixture[] = [
       textBody: 'matrix',
       raw: 'Subject: matrix\r\n\r\nmatrix',
     });
+    // A study nothing else refers to: the main one gets a signed decision below, which blocks its deletion (409).
+    const spare = await ctx.db.getRepository(Study).save({ teamId: team.team.id, ownerId: team.engineer.id, name: 'Spare study', visibility: 'team' });
     return {
       studyId: study.id,
+      deletableStudyId: spare.id,
       tokenId: token.id,
       userId: team.reviewer.id,
       // a member nothing else refers to, so removing them is not blocked by later fixtures (sign-offs keep their author)
@@ -189,7 +192,7 @@ export const matrix: MatrixRow[] = [
   { method: 'POST', path: '/api/studies/import', body: {}, anonymous: 401, reviewer: 403, engineer: 400, admin: 400, otherTeam: 400 },
   { method: 'GET', path: '/api/studies/:id', params: { id: 'studyId' }, ...member(200), otherTeam: 404 },
   { method: 'PATCH', path: '/api/studies/:id', params: { id: 'studyId' }, body: {}, anonymous: 401, reviewer: 403, engineer: 200, admin: 200, otherTeam: 404 },
-  { method: 'DELETE', path: '/api/studies/:id', params: { id: 'studyId' }, anonymous: 401, reviewer: 403, engineer: 204, admin: 204, otherTeam: 404 },
+  { method: 'DELETE', path: '/api/studies/:id', params: { id: 'deletableStudyId' }, anonymous: 401, reviewer: 403, engineer: 204, admin: 204, otherTeam: 404 },
   { method: 'POST', path: '/api/studies/:id/duplicate', params: { id: 'studyId' }, anonymous: 401, reviewer: 403, engineer: 201, admin: 201, otherTeam: 404 },
   { method: 'GET', path: '/api/studies/:id/export', params: { id: 'studyId' }, ...member(200), otherTeam: 404 },
   { method: 'GET', path: '/api/studies/:id/candidates', params: { id: 'studyId' }, ...member(200), otherTeam: 404 },

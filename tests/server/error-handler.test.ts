@@ -84,3 +84,16 @@ describe('errorHandler', () => {
     expect(await statusFor('42P01')).toBe(500);
   });
 });
+
+describe('validate() and bodies nobody parsed', () => {
+  const Optional = z.object({ name: z.string().optional() }).strict();
+  it('refuses text/plain on a JSON route with 415 naming the body', async () => {
+    const res = await request(appWith([validate({ body: Optional })])).post('/thing').set('content-type', 'text/plain').send('name=x');
+    expect(res.status).toBe(415);
+    expect(res.body.error.fields[0].field).toBe('body');
+  });
+  it('still accepts an empty body for a schema whose fields are optional', async () => {
+    const res = await request(appWith([validate({ body: Optional })])).post('/thing');
+    expect(res.status).toBe(200);
+  });
+});
