@@ -125,13 +125,13 @@ describe('SweepsPanel', () => {
     const w = mount(SweepsPanel, { props: { studyId: 's1' }, global: { plugins: [Antd] }, attachTo: document.body });
     await flushPromises();
     const count = () => w.find('[data-test="point-count"]').text();
-    expect(count()).toContain('1 points');
+    expect(count()).toContain('1 point (1 design × 1 steering angle)');
 
     await w.find('[data-field="nx"] input[type="radio"][value="list"]').setValue(true);
     await flushPromises();
     await w.find('#sweep-field-nx').setValue('4, 8, 16');
     await flushPromises();
-    expect(count()).toMatch(/^3 points \(3 designs × 1 steering angles\)/);
+    expect(count()).toMatch(/^3 points \(3 designs × 1 steering angle\)/);
 
     await w.find('#sweep-field-nx').setValue('4, eight');
     await flushPromises();
@@ -180,4 +180,15 @@ describe('SweepsPanel', () => {
     expect(w.find('[data-field="dxMm"] .error').text()).toContain('is too fine for this server');
     w.unmount();
   }, 30_000);
+});
+
+describe('optionIdOf', () => {
+  it('matches a candidate taper or element to the catalogue whatever its key order, and names a new one in words', async () => {
+    const { optionIdOf } = await import('../../src/components/sweep/sweep-form.ts');
+    const options = [{ id: 'cos15', label: 'Cosine, q = 1.5', value: { kind: 'cosine', q: 1.5 } }];
+    expect(optionIdOf(options, { q: 1.5, kind: 'cosine' }, () => 'x')).toBe('cos15');
+    expect(options).toHaveLength(1);
+    const added = optionIdOf(options, { kind: 'cosine', q: 1.7 }, (e) => `Cosine, q = ${e.q}`);
+    expect(options.find((o) => o.id === added)?.label).toBe('Cosine, q = 1.7');
+  });
 });

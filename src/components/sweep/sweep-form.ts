@@ -102,10 +102,30 @@ export interface CandidateDesign {
 
 const fixed = (v: number | null): NumberFieldState => ({ mode: 'fixed', fixed: v, start: v, stop: v, step: null, list: v === null ? '' : String(v) });
 
+/** JSON with sorted keys, so {kind, q} and {q, kind} are the same option. */
+function canonicalKey(value: unknown): string {
+  return JSON.stringify(value, (_k, v: unknown) =>
+    v && typeof v === 'object' && !Array.isArray(v)
+      ? Object.fromEntries(Object.entries(v as Record<string, unknown>).sort(([a], [b]) => a.localeCompare(b)))
+      : v,
+  );
+}
+
+/** Words for a taper or element the catalogue lacks. */
+function describeChoice(value: Taper | Element): string {
+  switch (value.kind) {
+    case 'taylor': return `Taylor ${value.sllDb} dB, n̄ ${value.nbar}`;
+    case 'chebyshev': return `Dolph-Chebyshev ${value.sllDb} dB`;
+    case 'cosine': return `Cosine, q = ${value.q}`;
+    case 'tr38901': return '3GPP TR 38.901 element';
+    default: return value.kind.charAt(0).toUpperCase() + value.kind.slice(1);
+  }
+}
+
 /** Option id of a value, adding an option for a value the catalogue lacks (the candidate's own taper). */
 export function optionIdOf<T>(options: ChoiceOption<T>[], value: T, label: (v: T) => string): string {
-  const key = JSON.stringify(value);
-  const hit = options.find((o) => JSON.stringify(o.value) === key);
+  const key = canonicalKey(value);
+  const hit = options.find((o) => canonicalKey(o.value) === key);
   if (hit) return hit.id;
   const id = `custom:${key}`;
   options.push({ id, label: label(value), value });
@@ -119,7 +139,6 @@ export function stateFromCandidate(
   taperOptions: ChoiceOption<Taper>[],
   elementOptions: ChoiceOption<Element>[],
 ): SweepFormState {
-  const taperText = (t: Taper) => JSON.stringify(t);
   return {
     name,
     numbers: {
@@ -134,9 +153,9 @@ export function stateFromCandidate(
       steerElDeg: fixed(d.steerElDeg ?? 0),
     },
     choices: {
-      taperX: [optionIdOf(taperOptions, d.taperX ?? { kind: 'uniform' }, taperText)],
-      taperY: [optionIdOf(taperOptions, d.taperY ?? { kind: 'uniform' }, taperText)],
-      element: [optionIdOf(elementOptions, d.element ?? { kind: 'isotropic' }, (e) => JSON.stringify(e))],
+      taperX: [optionIdOf(taperOptions, d.taperX ?? { kind: 'uniform' }, describeChoice)],
+      taperY: [optionIdOf(taperOptions, d.taperY ?? { kind: 'uniform' }, describeChoice)],
+      element: [optionIdOf(elementOptions, d.element ?? { kind: 'isotropic' }, describeChoice)],
       grouping: [d.grouping ?? 'element'],
     },
     constraints: { maxApertureXMm: null, maxApertureYMm: null, maxChannels: null, minChannels: null },
