@@ -1,6 +1,7 @@
 /**
  * The message a worker thread receives: the grid (shape only; it was fully checked when the sweep was made)
- * and a half-open range of point indices. The answer is plain data, one entry per point, in order.
+ * and a half-open range of point indices. The answer is plain data, one entry per point, in order (or, for
+ * the CLI, the same points already written as JSON lines: one string is far cheaper to pass between threads).
  */
 import { z } from 'zod';
 import { SweepConstraintsSchema, SweepGridShapeSchema } from './grid-schema.ts';
@@ -13,10 +14,12 @@ export const SweepChunkSchema = z
     constraints: SweepConstraintsSchema,
     start: z.int().min(0),
     end: z.int().min(0),
+    /** 'rows': PointResult[] (the database path); 'lines': one string of JSON lines, as `cli sweep` prints them. */
+    output: z.enum(['rows', 'lines']).default('rows'),
   })
   .strict()
   .refine((c) => c.end >= c.start, { path: ['end'], message: 'must be at least start' });
-export type SweepChunk = z.output<typeof SweepChunkSchema>;
+export type SweepChunk = Omit<z.output<typeof SweepChunkSchema>, 'output'> & { output?: 'rows' | 'lines' };
 
 export interface PointResult {
   index: number;

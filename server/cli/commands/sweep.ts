@@ -6,12 +6,15 @@
 import { readFileSync } from 'node:fs';
 import { z } from 'zod';
 import { formatIssue } from '../../../shared/schemas/format-issue.ts';
-import type { PointResult } from '../../../shared/sweep/chunk.ts';
+import { planChunks } from '../../../shared/sweep/chunks.ts';
 import { SweepGridSchema } from '../../../shared/sweep/grid-check.ts';
-import { GridTooLarge } from '../../../shared/sweep/grid.ts';
-import { SweepConstraintsSchema } from '../../../shared/sweep/grid-schema.ts';
-import { runOffline } from '../../sweeps/offline.ts';
+import { compileGrid, GridTooLarge } from '../../../shared/sweep/grid.ts';
+import { SweepConstraintsSchema, type SweepConstraints, type SweepGridShape } from '../../../shared/sweep/grid-schema.ts';
+import { gridKey } from '../../sweeps/offline.ts';
+import { createSweepPool, type SweepPool } from '../../sweeps/pool.ts';
 import { UsageError } from '../usage-error.ts';
+
+export { pointLine } from '../../../shared/sweep/chunk-lines.ts';
 
 const USAGE = 'usage: cli sweep --grid FILE [--workers N]';
 
@@ -53,8 +56,53 @@ function progressBar(done: number, total: number): string {
   return `\r[${'#'.repeat(filled)}${'.'.repeat(width - filled)}] ${done}/${total}`;
 }
 
-export function pointLine(p: PointResult): string {
-  return JSON.stringify(p.error === null ? { index: p.index, design: p.design, metrics: p.metrics } : { index: p.index, design: p.design, metrics: null, error: p.error });
+export interface SweepLinesOptions {
+  threads?: number;
+  /** A pool to use (and leave running) instead of starting one. */
+  pool?: SweepPool;
+  chunkPoints?: number;
+  /** Called once per chunk, in point order, with that chunk's JSON lines (each ending in a newline). */
+  onLines(lines: string, points: number): void | Promise<void>;
+  onProgress?(done: number, total: number): void;
+}
+
+/**
+ * The `cli sweep` path: like runOffline, but the threads hand back finished JSON lines, one string per chunk,
+ * so the main thread neither re-serialises points nor unpacks a structured clone of every object.
+ */
+export async function sweepLines(grid: SweepGridShape, constraints: SweepConstraints, options: SweepLinesOptions): Promise<{ points: number }> {
+  const compiled = compileGrid(grid, constraints);
+  const chunks = planChunks(compiled, options.chunkPoints);
+  const pool = options.pool ?? createSweepPool({ threads: options.threads });
+  const key = gridKey(grid, constraints);
+  // A few chunks per thread in flight, so no thread waits while output is written in order.
+  const window = pool.threads * 3;
+  const pending = new Map<number, Promise<string>>();
+  let next = 0;
+  let done = 0;
+  const launch = () => {
+    while (next < chunks.length && pending.size < window) {
+      const c = chunks[next]!;
+      const p = pool.runLines({ gridKey: key, grid, constraints, start: c.start, end: c.end });
+      p.catch(() => undefined); // awaited in order below; avoid an unhandled rejection meanwhile
+      pending.set(next++, p);
+    }
+  };
+  try {
+    for (let i = 0; i < chunks.length; i++) {
+      launch();
+      const lines = await pending.get(i)!;
+      pending.delete(i);
+      const c = chunks[i]!;
+      const n = Math.min(c.end, compiled.points) - c.start;
+      await options.onLines(lines, n);
+      done += n;
+      options.onProgress?.(done, compiled.points);
+    }
+  } finally {
+    if (!options.pool) await pool.destroy();
+  }
+  return { points: compiled.points };
 }
 
 export async function sweepCommand(argv: string[]): Promise<number> {
@@ -63,11 +111,11 @@ export async function sweepCommand(argv: string[]): Promise<number> {
   const tty = process.stderr.isTTY === true;
   const out = process.stdout;
   try {
-    await runOffline(grid, constraints, {
+    await sweepLines(grid, constraints, {
       threads: workers,
-      onRows: async (rows) => {
-        if (rows.length === 0) return;
-        if (!out.write(rows.map(pointLine).join('\n') + '\n')) await new Promise((r) => out.once('drain', r));
+      onLines: async (lines) => {
+        if (lines.length === 0) return;
+        if (!out.write(lines)) await new Promise((r) => out.once('drain', r));
       },
       onProgress: tty ? (done, total) => process.stderr.write(progressBar(done, total)) : undefined,
     });

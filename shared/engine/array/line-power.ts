@@ -3,6 +3,8 @@
  * (one sin/cos per call, no allocation). Element offsets from the centre only add a common phase.
  */
 export function linePower(re: Float64Array, im: Float64Array, n: number, kd: number, s: number): number {
+  // One element (every ny = 1 array's y factor): no phase to turn, so skip the sine and cosine.
+  if (n === 1) return re[0]! * re[0]! + im[0]! * im[0]!;
   const zr = Math.cos(kd * s);
   const zi = Math.sin(kd * s);
   let sr = re[n - 1]!;

@@ -5,8 +5,8 @@ import { linePower } from '../array/line-power.ts';
 import type { Peak } from '../search/find-peak.ts';
 import { cutStepRad } from '../search/grid-step.ts';
 import { cutMetrics, type CutMetrics } from './cut-metrics.ts';
-import { cutAngle, cutSampleCount } from './cut-samples.ts';
-import { cutSines, elementCutSamples } from './cut-tables.ts';
+import { cutSampleCount } from './cut-samples.ts';
+import { cutCosines, cutSines, elementCutSamples } from './cut-tables.ts';
 
 let scratch = new Float64Array(0);
 
@@ -44,10 +44,8 @@ export function beamCuts(model: ArrayModel, peak: Peak): { az: CutMetrics; el: C
   for (let i = 0; i < nAz; i++) sAz[i] = linePower(re, im, nx, model.kdx, sin[i]! * cosEl0) * scale * e[i]!;
   elementCutSamples(model, 'el', az0, nEl, e);
   sin = cutSines(nEl);
-  for (let i = 0; i < nEl; i++) {
-    const ce = Math.cos(cutAngle(i, nEl));
-    sEl[i] = arrayPower(model, sinAz0 * ce, sin[i]!) * e[i]!;
-  }
+  const cos = cutCosines(nEl);
+  for (let i = 0; i < nEl; i++) sEl[i] = arrayPower(model, sinAz0 * cos[i]!, sin[i]!) * e[i]!;
   return {
     az: cutMetrics(fAz, sAz, nAz, az0, peak.power),
     el: cutMetrics(fEl, sEl, nEl, el0, peak.power),

@@ -3,6 +3,7 @@ import { createMemo } from '../util/memo.ts';
 import { cutAngle } from './cut-samples.ts';
 
 const sines = createMemo<Float64Array>(16);
+const cosines = createMemo<Float64Array>(16);
 const factors = createMemo<Float64Array>(32);
 
 /** sin of every angle of a cut of `count` samples (shared, read-only). */
@@ -10,6 +11,15 @@ export function cutSines(count: number): Float64Array {
   return sines.get(String(count), () => {
     const out = new Float64Array(count);
     for (let i = 0; i < count; i++) out[i] = Math.sin(cutAngle(i, count));
+    return out;
+  });
+}
+
+/** cos of every angle of a cut of `count` samples (shared, read-only). */
+export function cutCosines(count: number): Float64Array {
+  return cosines.get(String(count), () => {
+    const out = new Float64Array(count);
+    for (let i = 0; i < count; i++) out[i] = Math.cos(cutAngle(i, count));
     return out;
   });
 }

@@ -6,8 +6,12 @@ import { elementGrid } from './element-grid.ts';
 const KEEP_RATIO = 0.25;
 const MAX_CANDIDATES = 12;
 
+// Reused between calls (each call overwrites every cell it reads): no 25 kB allocation per point.
+let scratch = new Float64Array(0);
+
 function gridPower(model: ArrayModel, nu: number, nv: number): Float64Array {
-  const out = new Float64Array(nu * nv);
+  if (scratch.length < nu * nv) scratch = new Float64Array(nu * nv);
+  const out = scratch.subarray(0, nu * nv);
   const { nx, ny } = model;
   if (model.separable) {
     const py = new Float64Array(nv);
