@@ -37,8 +37,9 @@ export function validate(schemas: Schemas): RequestHandler {
       const value = part === 'body' && req.body === undefined ? {} : req[part];
       const parsed = schema.safeParse(value);
       if (!parsed.success) {
-        const prefix = part === 'body' ? '' : `${part}.`;
-        fields.push(...issueFields(parsed.error).map((f) => ({ ...f, field: `${prefix}${f.field}` })));
+        // A root-level issue (a list where an object belongs) names the part itself.
+        const name = (field: string) => (part === 'body' ? field || 'body' : field ? `${part}.${field}` : part);
+        fields.push(...issueFields(parsed.error).map((f) => ({ ...f, field: name(f.field) })));
       } else if (part === 'body') {
         req.body = parsed.data;
       } else {

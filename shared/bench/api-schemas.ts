@@ -59,9 +59,17 @@ export const SquintRequestSchema = z
 export type SquintRequest = z.output<typeof SquintRequestSchema>;
 
 /** Multipart fields of a range-data upload (strings on the wire). */
+const ANGLE_RULE = 'must be a number from -90 to 90 (degrees)';
+/** A form field is text: an empty one is a mistake, not zero (an absent one takes the default). */
+const formAngle = z
+  .string({ error: ANGLE_RULE })
+  .trim()
+  .min(1, ANGLE_RULE)
+  .pipe(z.coerce.number<string>({ error: ANGLE_RULE }).min(-90, ANGLE_RULE).max(90, ANGLE_RULE));
+
 export const RangeUploadFieldsSchema = z.object({
-  azDeg: z.coerce.number({ error: 'must be a number from -90 to 90 (degrees)' }).min(-90, 'must be a number from -90 to 90 (degrees)').max(90, 'must be a number from -90 to 90 (degrees)'),
-  elDeg: z.coerce.number({ error: 'must be a number from -90 to 90 (degrees)' }).min(-90, 'must be a number from -90 to 90 (degrees)').max(90, 'must be a number from -90 to 90 (degrees)').default(0),
+  azDeg: formAngle,
+  elDeg: formAngle.default(0),
   /** Codes as loaded, "0,15,30,45" (or a JSON list); computed from the beam when absent. */
   codes: z
     .string()
@@ -78,5 +86,5 @@ export const RangeUploadFieldsSchema = z.object({
       return codes;
     }),
   setName: z.string().trim().min(1, 'must be 1 to 200 characters').max(200, 'must be 1 to 200 characters').optional(),
-});
+}).strict();
 export type RangeUploadFields = z.output<typeof RangeUploadFieldsSchema>;

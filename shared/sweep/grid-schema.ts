@@ -54,7 +54,9 @@ export const SweepGridShapeSchema = z
 export type SweepGridInput = z.input<typeof SweepGridShapeSchema>;
 export type SweepGridShape = z.output<typeof SweepGridShapeSchema>;
 
-const limitMm = z.number({ error: 'must be a number greater than 0 (mm)' }).positive('must be a number greater than 0 (mm)');
+const LIMIT_MM_RULE = 'must be a number greater than 0 and at most 10000 (mm)';
+const limitMm = z.number({ error: LIMIT_MM_RULE }).positive(LIMIT_MM_RULE).max(10_000, LIMIT_MM_RULE);
+const CHANNELS_RULE = 'must be an integer from 1 to 4096';
 
 /** Constraints that depend on geometry only, so they drop whole designs before anything is evaluated. */
 export const SweepConstraintsSchema = z
@@ -62,8 +64,8 @@ export const SweepConstraintsSchema = z
     {
       maxApertureXMm: limitMm.optional(),
       maxApertureYMm: limitMm.optional(),
-      maxChannels: z.int({ error: 'must be an integer of at least 1' }).min(1, 'must be an integer of at least 1').optional(),
-      minChannels: z.int({ error: 'must be an integer of at least 1' }).min(1, 'must be an integer of at least 1').optional(),
+      maxChannels: z.int({ error: CHANNELS_RULE }).min(1, CHANNELS_RULE).max(4096, CHANNELS_RULE).optional(),
+      minChannels: z.int({ error: CHANNELS_RULE }).min(1, CHANNELS_RULE).max(4096, CHANNELS_RULE).optional(),
     },
     { error: 'must be a constraints object' },
   )

@@ -27,19 +27,26 @@ function parseNumber(s: string): number | null {
   return Number.isFinite(n) ? n : NaN;
 }
 
+const INT32_MAX = 2 ** 31 - 1;
+
 /** One filter from its text form, or a message saying what is wrong with it. */
 function parseFilterText(def: ColumnDef, text: string): Filter | string {
   if (def.kind === 'text') return { field: def.field, eq: text };
   if (def.kind === 'bool') return text === 'true' || text === 'false' ? { field: def.field, eq: text === 'true' } : 'must be true or false';
   const m = RANGE.exec(text);
   const rule = 'must be a number or a range min..max (either end may be left out)';
+  // Integer columns are PostgreSQL integers: a fractional or huge bound would fail in the database.
+  const badInt = (n: number | null) => def.kind === 'int' && n !== null && !(Number.isInteger(n) && Math.abs(n) <= INT32_MAX);
+  const intRule = `must be whole numbers from -${INT32_MAX} to ${INT32_MAX} for this field`;
   if (!m) {
     const n = parseNumber(text);
-    return n === null || Number.isNaN(n) ? rule : { field: def.field, eq: n };
+    if (n === null || Number.isNaN(n)) return rule;
+    return badInt(n) ? intRule : { field: def.field, eq: n };
   }
   const min = parseNumber(m[1]!);
   const max = parseNumber(m[2]!);
   if (Number.isNaN(min) || Number.isNaN(max) || (min === null && max === null)) return rule;
+  if (badInt(min) || badInt(max)) return intRule;
   if (min !== null && max !== null && min > max) return 'must be a range whose min is at most its max';
   return { field: def.field, ...(min !== null ? { min } : {}), ...(max !== null ? { max } : {}) };
 }

@@ -4,11 +4,15 @@
  */
 import { z } from 'zod';
 
-const num = (rule: string) => z.number({ error: rule }).nullable().optional();
+// Bounds keep absurd figures (1e308) out of a saved sheet; they sit far beyond any real array.
+const EIRP_RULE = 'must be a number from -100 to 150 (dBm)';
+const eirp = z.number({ error: EIRP_RULE }).min(-100, EIRP_RULE).max(150, EIRP_RULE).nullable().optional();
+const APERTURE_MAX_MM = 10_000;
 const positive = (unit: string) =>
   z
-    .number({ error: `must be a number greater than 0 (${unit})` })
-    .positive(`must be a number greater than 0 (${unit})`)
+    .number({ error: `must be a number greater than 0 and at most ${APERTURE_MAX_MM} (${unit})` })
+    .positive(`must be a number greater than 0 and at most ${APERTURE_MAX_MM} (${unit})`)
+    .max(APERTURE_MAX_MM, `must be a number greater than 0 and at most ${APERTURE_MAX_MM} (${unit})`)
     .nullable()
     .optional();
 
@@ -43,30 +47,34 @@ export const TargetSheetSchema = z
       maxApertureXMm: positive('mm'),
       maxApertureYMm: positive('mm'),
       maxChannels: z
-        .int({ error: 'must be an integer of at least 1 (channels)' })
-        .min(1, 'must be an integer of at least 1 (channels)')
+        .int({ error: 'must be an integer from 1 to 4096 (channels)' })
+        .min(1, 'must be an integer from 1 to 4096 (channels)')
+        .max(4096, 'must be an integer from 1 to 4096 (channels)')
         .nullable()
         .optional(),
       scanAzDeg: ScanRangeSchema.nullable().optional(),
       scanElDeg: ScanRangeSchema.nullable().optional(),
-      minPeakEirpDbm: num('must be a number (dBm)'),
-      minEdgeEirpDbm: num('must be a number (dBm)'),
+      minPeakEirpDbm: eirp,
+      minEdgeEirpDbm: eirp,
       maxScanLossDb: z
-        .number({ error: 'must be a number of at least 0 (dB)' })
-        .min(0, 'must be a number of at least 0 (dB)')
+        .number({ error: 'must be a number from 0 to 60 (dB)' })
+        .min(0, 'must be a number from 0 to 60 (dB)')
+        .max(60, 'must be a number from 0 to 60 (dB)')
         .nullable()
         .optional(),
       hpbwAzDeg: WidthRangeSchema.nullable().optional(),
       hpbwElDeg: WidthRangeSchema.nullable().optional(),
       maxSllDb: z
-        .number({ error: 'must be a number of at most 0 (dB relative to the peak, e.g. -13)' })
-        .max(0, 'must be a number of at most 0 (dB relative to the peak, e.g. -13)')
+        .number({ error: 'must be a number from -100 to 0 (dB relative to the peak, e.g. -13)' })
+        .min(-100, 'must be a number from -100 to 0 (dB relative to the peak, e.g. -13)')
+        .max(0, 'must be a number from -100 to 0 (dB relative to the peak, e.g. -13)')
         .nullable()
         .optional(),
       noGratingLobeInScan: z.boolean({ error: 'must be true or false' }).nullable().optional(),
       maxPointingErrorDeg: z
-        .number({ error: 'must be a number of at least 0 (degrees)' })
-        .min(0, 'must be a number of at least 0 (degrees)')
+        .number({ error: 'must be a number from 0 to 90 (degrees)' })
+        .min(0, 'must be a number from 0 to 90 (degrees)')
+        .max(90, 'must be a number from 0 to 90 (degrees)')
         .nullable()
         .optional(),
     },

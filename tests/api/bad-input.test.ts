@@ -140,24 +140,7 @@ const QUERIES: Record<string, string[]> = {
  * Failures known today, each with its cause; they still run, and a rule that no longer matches any
  * failure fails the test so it is removed once the route is fixed. route '*' matches every route.
  */
-const KNOWN: { route: string; label: string | RegExp; why: string }[] = [
-  {
-    route: '*',
-    label: 'a list where an object is expected',
-    why: 'validate() reports a root-level body issue with field "" (message ": must be …"); it should name "body"',
-  },
-
-  {
-    route: '*',
-    label: /^\?filter\[(nx|designIndex)\]=0\.5/,
-    why: 'a fractional bound on an integer column reaches PostgreSQL (22P02): 400 "a value has the wrong format" naming no field',
-  },
-  { route: 'POST /api/auth/login', label: 'password = 100k characters', why: 'LoginBody.password has no max length: reaches argon2, 401, audit row' },
-  { route: 'POST /api/candidates/:id/range-data', label: /^(azDeg|elDeg) = ""$/, why: 'z.coerce.number turns an empty form field into 0' },
-  { route: 'POST /api/candidates/:id/range-data', label: 'unknown form field', why: 'RangeUploadFieldsSchema is not strict' },
-  { route: 'PUT /api/studies/:id/target-sheet', label: /^sheet\.(maxApertureXMm|minPeakEirpDbm) = (1e308|2\*\*53\+1)$/, why: 'sheet limits have no upper bound' },
-  { route: 'POST /api/studies/:id/sweeps', label: /^constraints\.maxApertureXMm = (1e308|2\*\*53\+1)$/, why: 'sweep aperture constraints have no upper bound' },
-];
+const KNOWN: { route: string; label: string | RegExp; why: string }[] = [];
 const knownRule = (o: { route: string; label: string }) =>
   KNOWN.find((k) => (k.route === '*' || k.route === o.route) && (typeof k.label === 'string' ? k.label === o.label : k.label.test(o.label)));
 

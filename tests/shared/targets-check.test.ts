@@ -88,7 +88,7 @@ describe('TargetSheetSchema', () => {
     expect(r.success).toBe(false);
     expect(r.error?.issues[0]?.path).toEqual(['scanAzDeg', 'min']);
     const u = TargetSheetSchema.safeParse({ maxSllDb: 13 });
-    expect(u.error?.issues[0]?.message).toMatch(/at most 0/);
+    expect(u.error?.issues[0]?.message).toMatch(/from -100 to 0/);
     expect(TargetSheetSchema.safeParse({ maxChanels: 4 }).success).toBe(false);
   });
 });
