@@ -74,11 +74,24 @@ export const useCandidatesStore = defineStore('candidates', () => {
     return created;
   }
 
+  const inFlight = new Set<Promise<unknown>>();
+
   async function saveDesign(id: string, design: DesignInput): Promise<CandidateRow> {
-    const saved = await api.patch<CandidateRow>(`/api/candidates/${id}`, { design });
-    const row = list.value.find((c) => c.id === id);
-    if (row) Object.assign(row, saved);
-    return saved;
+    const request = api.patch<CandidateRow>(`/api/candidates/${id}`, { design });
+    inFlight.add(request);
+    try {
+      const saved = await request;
+      const row = list.value.find((c) => c.id === id);
+      if (row) Object.assign(row, saved);
+      return saved;
+    } finally {
+      inFlight.delete(request);
+    }
+  }
+
+  /** Resolves once every design save under way has finished, so a reader of the server sees the latest edit. */
+  async function settled(): Promise<void> {
+    await Promise.allSettled([...inFlight]);
   }
 
   async function rename(id: string, name: string): Promise<void> {
@@ -114,5 +127,5 @@ export const useCandidatesStore = defineStore('candidates', () => {
     overlayIds.value = overlayIds.value.includes(id) ? overlayIds.value.filter((x) => x !== id) : [...overlayIds.value, id];
   }
 
-  return { studyId, list, loading, error, selectedId, selected, overlayIds, overlay, load, create, saveDesign, rename, remove, select, toggleOverlay };
+  return { studyId, list, loading, error, selectedId, selected, overlayIds, overlay, load, create, saveDesign, settled, rename, remove, select, toggleOverlay };
 });

@@ -7,6 +7,7 @@ import { ref } from 'vue';
 import { api, ApiRequestError } from '@/api/client';
 import type { SweepConstraints, SweepGridInput } from '@shared/sweep/grid-schema.ts';
 import type { CandidateDesign } from '@/components/sweep/sweep-form';
+import { useCandidatesStore } from '@/stores/candidates';
 
 export type SweepStatus = 'queued' | 'running' | 'done' | 'failed' | 'cancelled';
 
@@ -59,6 +60,8 @@ export const useSweepsStore = defineStore('sweeps', () => {
     loading.value = true;
     error.value = null;
     try {
+      // An edit saved as the Candidates tab closed must land before we read the candidates back.
+      await useCandidatesStore().settled();
       const [c, s] = await Promise.all([
         api.get<unknown>(`/api/studies/${encodeURIComponent(id)}/candidates`),
         api.get<unknown>(`/api/studies/${encodeURIComponent(id)}/sweeps`),
