@@ -10,6 +10,7 @@ import { Team } from '../entities/team.ts';
 import { scanDesign } from '../packet/design-scan.ts';
 import { ENGINE_VERSION } from '../../shared/engine/index.ts';
 import { DesignSchema } from '../../shared/schemas/design.ts';
+import type { StudyReview } from '../../shared/schemas/review.ts';
 import { exposureEstimate, REFERENCE_LEVEL_SOURCE, RF_EXPOSURE_CAUTION, type ExposureEstimate } from '../../shared/safety/index.ts';
 import { scanAngleDeg, type DesignFigures } from '../../shared/targets/figures.ts';
 import { LIMIT_KEYS, LIMIT_LABELS, type LimitKey, type TargetSheet } from '../../shared/targets/sheet.ts';
@@ -17,7 +18,7 @@ import { rowVerdict, type Verdict } from '../../shared/trade/judge.ts';
 import { compareByObjective, RANK_OBJECTIVES } from '../../shared/trade/rank.ts';
 import type { TradeDesign, TradeParams } from '../../shared/trade/trade-design.ts';
 import { listDecisions, type DecisionView } from './decision-service.ts';
-import { getStudyReview, type StudyReview } from './review-request-service.ts';
+import { getStudyReview } from './review-request-service.ts';
 import { findStudyFor } from './study-access.ts';
 
 /** Ranked rows printed; a packet is read, not searched. */

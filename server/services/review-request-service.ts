@@ -5,38 +5,13 @@
 import type { AuthUser } from '../auth/types.ts';
 import { fieldError } from '../auth/errors.ts';
 import type { AppContext } from '../context.ts';
-import { ReviewRequest, type ReviewRequestState } from '../entities/review-request.ts';
+import { ReviewRequest } from '../entities/review-request.ts';
 import type { Study } from '../entities/study.ts';
 import { User } from '../entities/user.ts';
 import { Forbidden, NotFound } from '../errors.ts';
-import type { ReviewAnswer, ReviewRequestCreate } from '../../shared/schemas/review.ts';
+import type { ReviewAnswer, ReviewRequestCreate, ReviewRequestView, StudyReview, StudyReviewState } from '../../shared/schemas/review.ts';
 import { audit } from './audit-service.ts';
 import { findStudyFor } from './study-access.ts';
-
-export const STUDY_REVIEW_STATES = ['draft', 'in_review', 'changes_requested', 'signed_off'] as const;
-export type StudyReviewState = (typeof STUDY_REVIEW_STATES)[number];
-
-export interface ReviewRequestView {
-  id: string;
-  studyId: string;
-  reviewer: { id: string; name: string; email: string };
-  requestedBy: { id: string; name: string };
-  state: ReviewRequestState;
-  message: string;
-  note: string;
-  createdAt: string;
-  answeredAt: string | null;
-}
-
-export interface StudyReview {
-  state: StudyReviewState;
-  /** Requests of the current round (since the last sign-off), newest first. */
-  requests: ReviewRequestView[];
-  asked: number;
-  answered: number;
-  /** The current signed decision's id and time, if any. */
-  signedDecision: { id: string; signedAt: string } | null;
-}
 
 type RequestFacts = Pick<ReviewRequest, 'reviewerId' | 'state' | 'createdAt' | 'answeredAt'>;
 

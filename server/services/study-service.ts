@@ -14,35 +14,12 @@ import {
   STUDY_EXPORT_VERSION,
   type StudyCreate,
   type StudyExport,
+  type StudyListItem,
   type StudyPatch,
   type SweepDefinition,
 } from '../../shared/schemas/study.ts';
 import { audit } from './audit-service.ts';
 import { findStudyFor, studyVisibilityWhere } from './study-access.ts';
-
-export interface StudyShareSummary {
-  userId: string;
-  name: string;
-  access: 'editor' | 'viewer';
-}
-
-/** One row of the studies list. */
-export interface StudyListItem {
-  id: string;
-  name: string;
-  description: string;
-  visibility: 'private' | 'team';
-  ownerId: string;
-  ownerName: string;
-  targetSheetPreset: string | null;
-  targetSheetName: string | null;
-  candidateCount: number;
-  sweepCount: number;
-  archivedAt: string | null;
-  createdAt: string;
-  updatedAt: string;
-  sharedWith: StudyShareSummary[];
-}
 
 /** True once the sweeps feature has created its table; before that every study has 0 sweeps. */
 export async function hasTable(db: EntityManager | AppContext['db'], table: string): Promise<boolean> {

@@ -5,18 +5,10 @@
 import type { Writable } from 'node:stream';
 import { DESIGN_COLUMNS, POINT_COLUMNS, type ColumnDef } from '../../shared/sweep/columns.ts';
 import type { ResultsQuery } from '../../shared/sweep/results-query.ts';
+import type { PointResult as PointRow } from '../../shared/sweep/chunk.ts';
 import type { AppContext } from '../context.ts';
 import type { Sweep } from '../entities/sweep.ts';
 import { buildQuery } from './sweep-query.ts';
-
-export interface PointRow {
-  index: number;
-  designIndex: number;
-  angleIndex: number;
-  design: Record<string, unknown>;
-  metrics: Record<string, unknown> | null;
-  error: string | null;
-}
 
 export interface Page<T> {
   total: number;

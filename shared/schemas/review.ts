@@ -135,3 +135,31 @@ export const DecisionPatchSchema = z
   )
   .strict();
 export type DecisionPatch = z.output<typeof DecisionPatchSchema>;
+
+export const STUDY_REVIEW_STATES = ['draft', 'in_review', 'changes_requested', 'signed_off'] as const;
+export type StudyReviewState = (typeof STUDY_REVIEW_STATES)[number];
+export type ReviewRequestState = 'asked' | 'approved' | 'changes_requested';
+
+/** A review request as the API answers it. */
+export interface ReviewRequestView {
+  id: string;
+  studyId: string;
+  reviewer: { id: string; name: string; email: string };
+  requestedBy: { id: string; name: string };
+  state: ReviewRequestState;
+  message: string;
+  note: string;
+  createdAt: string;
+  answeredAt: string | null;
+}
+
+/** GET /api/studies/:id/review. */
+export interface StudyReview {
+  state: StudyReviewState;
+  /** Requests of the current round (since the last sign-off), newest first. */
+  requests: ReviewRequestView[];
+  asked: number;
+  answered: number;
+  /** The current signed decision's id and time, if any. */
+  signedDecision: { id: string; signedAt: string } | null;
+}

@@ -32,6 +32,30 @@ export const StudyListQuerySchema = z
   .object({ archived: z.enum(['true', 'false'], { error: 'must be "true" or "false"' }).optional() })
   .transform((q) => ({ archived: q.archived === 'true' }));
 
+export interface StudyShareSummary {
+  userId: string;
+  name: string;
+  access: 'editor' | 'viewer';
+}
+
+/** One row of the studies list as the API answers it (GET /api/studies/:id adds canEdit). */
+export interface StudyListItem {
+  id: string;
+  name: string;
+  description: string;
+  visibility: 'private' | 'team';
+  ownerId: string;
+  ownerName: string;
+  targetSheetPreset: string | null;
+  targetSheetName: string | null;
+  candidateCount: number;
+  sweepCount: number;
+  archivedAt: string | null;
+  createdAt: string;
+  updatedAt: string;
+  sharedWith: StudyShareSummary[];
+}
+
 export const IdParamsSchema = z.object({ id: z.uuid({ error: 'must be a uuid' }) });
 
 export const CandidateCreateSchema = z

@@ -3,21 +3,11 @@
  * matters (font, colours are set as attributes by the charts); canvas charts go straight to PNG. A chart made of
  * a canvas under an SVG overlay is composited onto one canvas for PNG, and embedded as an image for SVG.
  */
+import { downloadBlob } from './download-blob';
+
 export type ChartFormat = 'svg' | 'png';
 
 const SVG_NS = 'http://www.w3.org/2000/svg';
-
-function download(blob: Blob, fileName: string): void {
-  const url = URL.createObjectURL(blob);
-  const a = document.createElement('a');
-  a.href = url;
-  a.download = fileName;
-  document.body.appendChild(a);
-  a.click();
-  a.remove();
-  // Give the browser a tick to start the download before the URL dies.
-  setTimeout(() => URL.revokeObjectURL(url), 1000);
-}
 
 /** The chart's SVG as a standalone document string; canvases inside the container become <image> layers. */
 export function chartSvgString(container: HTMLElement): string {
@@ -79,10 +69,10 @@ export async function saveChart(container: HTMLElement, baseName: string, format
   const text = chartSvgString(container);
   const safe = baseName.replace(/[^\w.-]+/g, '-').replace(/^-+|-+$/g, '') || 'chart';
   if (format === 'svg') {
-    download(new Blob([text], { type: 'image/svg+xml' }), `${safe}.svg`);
+    downloadBlob(new Blob([text], { type: 'image/svg+xml' }), `${safe}.svg`);
     return;
   }
   const m = /width="(\d+(?:\.\d+)?)" height="(\d+(?:\.\d+)?)"/.exec(text);
   const png = await svgToPng(text, Number(m?.[1] ?? 600), Number(m?.[2] ?? 400));
-  download(png, `${safe}.png`);
+  downloadBlob(png, `${safe}.png`);
 }

@@ -5,11 +5,12 @@
 import { defineStore } from 'pinia';
 import { computed, ref } from 'vue';
 import { api } from '@/api/client';
-import type { CommentCreateInput, DecisionCreateInput } from '@shared/schemas/review.ts';
+import type { CommentCreateInput, DecisionCreateInput, ReviewRequestState, ReviewRequestView, StudyReview } from '@shared/schemas/review.ts';
 import { errorText } from './studies';
 
-export type StudyReviewState = 'draft' | 'in_review' | 'changes_requested' | 'signed_off';
-export type RequestState = 'asked' | 'approved' | 'changes_requested';
+export type { StudyReview, StudyReviewState } from '@shared/schemas/review.ts';
+export type RequestState = ReviewRequestState;
+export type RequestRow = ReviewRequestView;
 export type ViewState = Record<string, unknown>;
 
 export interface Member {
@@ -28,25 +29,6 @@ export interface CommentRow {
   mentions: { id: string; name: string }[];
   createdAt: string;
   link: string;
-}
-
-export interface RequestRow {
-  id: string;
-  reviewer: { id: string; name: string; email: string };
-  requestedBy: { id: string; name: string };
-  state: RequestState;
-  message: string;
-  note: string;
-  createdAt: string;
-  answeredAt: string | null;
-}
-
-export interface StudyReview {
-  state: StudyReviewState;
-  requests: RequestRow[];
-  asked: number;
-  answered: number;
-  signedDecision: { id: string; signedAt: string } | null;
 }
 
 export interface FrozenPoint {

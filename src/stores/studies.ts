@@ -5,30 +5,10 @@
 import { defineStore } from 'pinia';
 import { computed, ref } from 'vue';
 import { api, ApiRequestError } from '@/api/client';
-import type { StudyCreate, StudyExport } from '@shared/schemas/study.ts';
+import type { StudyCreate, StudyExport, StudyListItem } from '@shared/schemas/study.ts';
 import type { TargetPreset, TargetSheet } from '@shared/targets/index.ts';
 
-export interface StudyShareSummary {
-  userId: string;
-  name: string;
-  access: 'editor' | 'viewer';
-}
-
-export interface StudyRow {
-  id: string;
-  name: string;
-  description: string;
-  visibility: 'private' | 'team';
-  ownerId: string;
-  ownerName: string;
-  targetSheetPreset: string | null;
-  targetSheetName: string | null;
-  candidateCount: number;
-  sweepCount: number;
-  archivedAt: string | null;
-  createdAt: string;
-  updatedAt: string;
-  sharedWith: StudyShareSummary[];
+export interface StudyRow extends StudyListItem {
   canEdit?: boolean;
 }
 

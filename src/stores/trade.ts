@@ -10,6 +10,7 @@ import type { SweepSummary } from '@/stores/sweeps';
 import { LIMIT_KEYS, type TargetSheet } from '@shared/targets/sheet.ts';
 import { MAX_PAGE_ROWS } from '@shared/sweep/results-query.ts';
 import { fromDesignRow, type DesignRowJson, type SteerSpan, type TradeDesign } from '@shared/trade/trade-design.ts';
+import type { PointResult } from '@shared/sweep/chunk.ts';
 import { queryString, type ViewQuery } from '@/components/trade/trade-query';
 
 /** Rows loaded for charts and ranking; beyond this the charts say they show the first rows of the current order. */
@@ -17,14 +18,8 @@ export const CHART_ROW_CAP = 20_000;
 /** Rows per request when loading more than one page (the server's page limit). */
 const BULK_PAGE = MAX_PAGE_ROWS;
 
-export interface PointRow {
-  index: number;
-  designIndex: number;
-  angleIndex: number;
-  design: Record<string, unknown>;
-  metrics: Record<string, unknown> | null;
-  error: string | null;
-}
+/** One point of GET /api/sweeps/:id/results: the row a sweep stored. */
+export type PointRow = PointResult;
 
 interface Page<T> {
   rows: T[];

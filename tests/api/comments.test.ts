@@ -1,51 +1,29 @@
-import type { Express } from 'express';
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { createApp } from '../../server/app.ts';
-import type { AppContext } from '../../server/context.ts';
+import { beforeEach, describe, expect, it } from 'vitest';
 import { mentionedIn } from '../../server/services/comment-service.ts';
-import { authed, linkIn, seedTeam, seedUser, startTestMail, type AuthedClient, type SeededTeam, type TestMail } from '../helpers/auth.ts';
-import { openTestContext, truncateAll } from '../helpers/db.ts';
+import { authed, linkIn, seedTeam, seedUser } from '../helpers/auth.ts';
+import { useApiTest } from '../helpers/app.ts';
 import { createStudy } from './review-fixtures.ts';
 
-let ctx: AppContext;
-let mail: TestMail;
-let app: Express;
-let t: SeededTeam;
-let engineer: AuthedClient;
-let reviewer: AuthedClient;
+const api = useApiTest({ mail: true, team: 'Kestrel Bay Arrays', signIn: ['engineer', 'reviewer'] });
 let studyId: string;
 
-beforeAll(async () => {
-  const base = await openTestContext();
-  mail = await startTestMail(base.db);
-  ctx = { ...base, mailer: mail.mailer };
-});
-afterAll(async () => {
-  await mail.close();
-  await ctx.db.destroy();
-});
 beforeEach(async () => {
-  await truncateAll(ctx.db);
-  app = createApp(ctx);
-  t = await seedTeam(ctx.db, 'Kestrel Bay Arrays');
-  engineer = await authed(app, t.engineer);
-  reviewer = await authed(app, t.reviewer);
-  studyId = await createStudy(engineer, 'Harbor Point edge module');
+  studyId = await createStudy(api.engineer, 'Harbor Point edge module');
 });
 
 const VIEW = { tab: 'trade', sweepId: 'f2d1', sort: [{ key: 'edgeEirpDbm', dir: 'desc' }], filters: { maxChannels: 8 }, selected: 12 };
 
 describe('POST /api/studies/:id/comments', () => {
   it('stores a comment on a design row with its view, and mails the @mentioned member a link that reopens it', async () => {
-    const res = await engineer
+    const res = await api.engineer
       .post(`/api/studies/${studyId}/comments`)
-      .send({ body: `@${t.reviewer.name} is row 12 worth the extra channels?`, target: { kind: 'design', ref: 'f2d1:12' }, viewState: VIEW });
+      .send({ body: `@${api.team.reviewer.name} is row 12 worth the extra channels?`, target: { kind: 'design', ref: 'f2d1:12' }, viewState: VIEW });
     expect(res.status).toBe(201);
-    expect(res.body).toMatchObject({ target: { kind: 'design', ref: 'f2d1:12' }, viewState: VIEW, author: { id: t.engineer.id } });
-    expect(res.body.mentions).toEqual([{ id: t.reviewer.id, name: t.reviewer.name }]);
+    expect(res.body).toMatchObject({ target: { kind: 'design', ref: 'f2d1:12' }, viewState: VIEW, author: { id: api.team.engineer.id } });
+    expect(res.body.mentions).toEqual([{ id: api.team.reviewer.id, name: api.team.reviewer.name }]);
 
-    const message = await mail.latestTo(t.reviewer.email);
-    expect(message.subject).toContain(t.engineer.name);
+    const message = await api.mail.latestTo(api.team.reviewer.email);
+    expect(message.subject).toContain(api.team.engineer.name);
     expect(message.textBody).toContain('is row 12 worth the extra channels?');
     const { url } = linkIn(message.textBody, `/studies/${studyId}`);
     expect(new URL(url).hash).toBe('#review');
@@ -53,57 +31,57 @@ describe('POST /api/studies/:id/comments', () => {
     expect(commentId).toBe(res.body.id);
 
     // The reader follows the link: the comment carries the exact view the author saw.
-    const reopened = await reviewer.get(`/api/comments/${commentId}`);
+    const reopened = await api.reviewer.get(`/api/comments/${commentId}`);
     expect(reopened.status).toBe(200);
     expect(reopened.body.viewState).toEqual(VIEW);
   });
 
   it('mails mentions picked by id too, but never the author and never someone outside the study', async () => {
-    const before = (await mail.messages()).length;
-    const res = await engineer.post(`/api/studies/${studyId}/comments`).send({ body: `Note to self @${t.engineer.name}`, mentions: [t.engineer.id] });
+    const before = (await api.mail.messages()).length;
+    const res = await api.engineer.post(`/api/studies/${studyId}/comments`).send({ body: `Note to self @${api.team.engineer.name}`, mentions: [api.team.engineer.id] });
     expect(res.status).toBe(201);
     expect(res.body.mentions).toEqual([]);
-    expect((await mail.messages()).length).toBe(before);
+    expect((await api.mail.messages()).length).toBe(before);
 
-    const picked = await engineer.post(`/api/studies/${studyId}/comments`).send({ body: 'see the HPBW chart', mentions: [t.admin.id], target: { kind: 'chart', ref: 'hpbw-vs-scan' } });
-    expect(picked.body.mentions.map((m: { id: string }) => m.id)).toEqual([t.admin.id]);
-    expect((await mail.latestTo(t.admin.email)).textBody).toContain('see the HPBW chart');
+    const picked = await api.engineer.post(`/api/studies/${studyId}/comments`).send({ body: 'see the HPBW chart', mentions: [api.team.admin.id], target: { kind: 'chart', ref: 'hpbw-vs-scan' } });
+    expect(picked.body.mentions.map((m: { id: string }) => m.id)).toEqual([api.team.admin.id]);
+    expect((await api.mail.latestTo(api.team.admin.email)).textBody).toContain('see the HPBW chart');
   });
 
   it('does not notify a member who cannot open a private study', async () => {
-    const privateId = (await engineer.post('/api/studies').send({ name: 'Private draft', visibility: 'private' })).body.id;
-    const colleague = await seedUser(ctx.db, t.team.id, 'engineer');
-    const res = await engineer.post(`/api/studies/${privateId}/comments`).send({ body: 'fyi', mentions: [colleague.id] });
+    const privateId = (await api.engineer.post('/api/studies').send({ name: 'Private draft', visibility: 'private' })).body.id;
+    const colleague = await seedUser(api.ctx.db, api.team.team.id, 'engineer');
+    const res = await api.engineer.post(`/api/studies/${privateId}/comments`).send({ body: 'fyi', mentions: [colleague.id] });
     expect(res.status).toBe(201);
     expect(res.body.mentions).toEqual([]);
-    await expect(mail.latestTo(colleague.email)).rejects.toThrow(/no mail/);
+    await expect(api.mail.latestTo(colleague.email)).rejects.toThrow(/no mail/);
   });
 
   it('lets a reviewer comment and lists the thread oldest first', async () => {
-    await engineer.post(`/api/studies/${studyId}/comments`).send({ body: 'first' });
-    await reviewer.post(`/api/studies/${studyId}/comments`).send({ body: 'second' });
-    const list = await engineer.get(`/api/studies/${studyId}/comments`);
+    await api.engineer.post(`/api/studies/${studyId}/comments`).send({ body: 'first' });
+    await api.reviewer.post(`/api/studies/${studyId}/comments`).send({ body: 'second' });
+    const list = await api.engineer.get(`/api/studies/${studyId}/comments`);
     expect(list.status).toBe(200);
     expect(list.body.map((c: { body: string }) => c.body)).toEqual(['first', 'second']);
   });
 
   it('answers 400 naming the field for bad input', async () => {
-    const empty = await engineer.post(`/api/studies/${studyId}/comments`).send({ body: '   ' });
+    const empty = await api.engineer.post(`/api/studies/${studyId}/comments`).send({ body: '   ' });
     expect(empty.status).toBe(400);
     expect(empty.body.error.fields[0].field).toBe('body');
-    const noRef = await engineer.post(`/api/studies/${studyId}/comments`).send({ body: 'x', target: { kind: 'chart' } });
+    const noRef = await api.engineer.post(`/api/studies/${studyId}/comments`).send({ body: 'x', target: { kind: 'chart' } });
     expect(noRef.body.error.fields[0].field).toBe('target.ref');
-    const stranger = (await seedTeam(ctx.db, 'Other Co')).engineer;
-    const foreign = await engineer.post(`/api/studies/${studyId}/comments`).send({ body: 'x', mentions: [stranger.id] });
+    const stranger = (await seedTeam(api.ctx.db, 'Other Co')).engineer;
+    const foreign = await api.engineer.post(`/api/studies/${studyId}/comments`).send({ body: 'x', mentions: [stranger.id] });
     expect(foreign.status).toBe(400);
     expect(foreign.body.error.message).toBe('mentions[0]: must be a member of your team');
   });
 
   it('answers 404 to another team and 401 when signed out', async () => {
-    const outsider = await authed(app, (await seedTeam(ctx.db, 'Other Co')).engineer);
+    const outsider = await authed(api.app, (await seedTeam(api.ctx.db, 'Other Co')).engineer);
     expect((await outsider.get(`/api/studies/${studyId}/comments`)).status).toBe(404);
     expect((await outsider.post(`/api/studies/${studyId}/comments`).send({ body: 'x' })).status).toBe(404);
-    const c = (await engineer.post(`/api/studies/${studyId}/comments`).send({ body: 'x' })).body;
+    const c = (await api.engineer.post(`/api/studies/${studyId}/comments`).send({ body: 'x' })).body;
     expect((await outsider.get(`/api/comments/${c.id}`)).status).toBe(404);
   });
 });

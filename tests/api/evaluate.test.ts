@@ -27,7 +27,7 @@ describe('POST /api/evaluate', () => {
     const one = await request(app).post('/api/evaluate').send(design);
     expect(one.status).toBe(200);
     expect(one.body).toEqual(cliEvaluate(design));
-    // The contract's worked example: 30° at 5 mm, 28 GHz, 6 bits -> codes 0, 15, 30, 45.
+    // Worked example of the phase-code rule: 30° at 5 mm, 28 GHz, 6 bits -> codes 0, 15, 30, 45.
     expect(one.body.codes).toEqual([0, 15, 30, 45]);
     const list = await request(app).post('/api/evaluate').send([design, { ...design, steerAzDeg: -30 }]);
     expect(list.body).toHaveLength(2);

@@ -1,41 +1,23 @@
-import type { Express } from 'express';
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { beforeEach, describe, expect, it } from 'vitest';
 // The library entry, not the package main, which runs a debug self-test when imported. @types/pdf-parse
 // describes the package main only, hence the cast below.
 // @ts-expect-error no declaration file for the library entry
 import pdfParseLib from 'pdf-parse/lib/pdf-parse.js';
-import { createApp } from '../../server/app.ts';
-import type { AppContext } from '../../server/context.ts';
 import { HANDSET_28GHZ } from '../../shared/targets/presets.ts';
-import { authed, seedTeam, type AuthedClient, type SeededTeam } from '../helpers/auth.ts';
-import { openTestContext, truncateAll } from '../helpers/db.ts';
+import { authed, seedTeam, type AuthedClient } from '../helpers/auth.ts';
+import { useApiTest } from '../helpers/app.ts';
 import { createStudy, EDGE_MODULE } from './review-fixtures.ts';
 
 const pdfParse = pdfParseLib as typeof import('pdf-parse');
 
-let ctx: AppContext;
-let app: Express;
-let t: SeededTeam;
-let engineer: AuthedClient;
-let reviewer: AuthedClient;
+const api = useApiTest({ team: 'Kestrel Bay Arrays', signIn: ['engineer', 'reviewer'] });
 let studyId: string;
 
-beforeAll(async () => {
-  ctx = await openTestContext();
-});
-afterAll(async () => {
-  await ctx.db.destroy();
-});
 beforeEach(async () => {
-  await truncateAll(ctx.db);
-  app = createApp(ctx);
-  t = await seedTeam(ctx.db, 'Kestrel Bay Arrays');
-  engineer = await authed(app, t.engineer);
-  reviewer = await authed(app, t.reviewer);
-  studyId = await createStudy(engineer, 'Harbor Point edge module');
-  await engineer.put(`/api/studies/${studyId}/target-sheet`).send({ preset: HANDSET_28GHZ.id, sheet: HANDSET_28GHZ.sheet }).expect(200);
+  studyId = await createStudy(api.engineer, 'Harbor Point edge module');
+  await api.engineer.put(`/api/studies/${studyId}/target-sheet`).send({ preset: HANDSET_28GHZ.id, sheet: HANDSET_28GHZ.sheet }).expect(200);
   for (const [name, nx] of [['Edge module A (6 elements)', 6], ['Edge module B (8 elements)', 8]] as const) {
-    await engineer.post(`/api/studies/${studyId}/candidates`).send({ name, design: { ...EDGE_MODULE, nx } }).expect(201);
+    await api.engineer.post(`/api/studies/${studyId}/candidates`).send({ name, design: { ...EDGE_MODULE, nx } }).expect(201);
   }
 });
 
@@ -59,11 +41,11 @@ async function pdfText(client: AuthedClient, query = '') {
 
 describe('GET /api/studies/:id/packet.pdf', () => {
   it('contains the study name, the chosen design, the caution, and the identity and page number on every page', async () => {
-    const signed = await reviewer
+    const signed = await api.reviewer
       .post(`/api/studies/${studyId}/decisions`)
       .send({ design: { ...EDGE_MODULE, nx: 8 }, label: 'Edge module B (8 elements)', rationale: 'Fewest channels that hold the edge EIRP.', alternatives: [{ label: 'Edge module A (6 elements)', reason: 'misses edge EIRP' }] });
     expect(signed.status).toBe(201);
-    const { text, pages } = await pdfText(engineer);
+    const { text, pages } = await pdfText(api.engineer);
     expect(text).toContain('Harbor Point edge module');
     expect(text).toContain('Chosen design: Edge module B (8 elements)');
     expect(text).toContain('Fewest channels that hold the edge EIRP.');
@@ -79,24 +61,24 @@ describe('GET /api/studies/:id/packet.pdf', () => {
   });
 
   it('still prints the caution when nothing is signed yet', async () => {
-    const { text } = await pdfText(reviewer);
+    const { text } = await pdfText(api.reviewer);
     expect(text).toContain('No decision has been signed for this study yet.');
     expect(text).toContain('This is a far-field estimate, not a compliance assessment.');
   });
 
   it('answers 400 for a bad distance and 404 for another team', async () => {
-    const bad = await engineer.get(`/api/studies/${studyId}/packet.pdf?distanceM=-1`);
+    const bad = await api.engineer.get(`/api/studies/${studyId}/packet.pdf?distanceM=-1`);
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields[0].field).toBe('query.distanceM');
-    const outsider = await authed(app, (await seedTeam(ctx.db, 'Other Co')).engineer);
+    const outsider = await authed(api.app, (await seedTeam(api.ctx.db, 'Other Co')).engineer);
     expect((await outsider.get(`/api/studies/${studyId}/packet.pdf`)).status).toBe(404);
   });
 });
 
 describe('GET /api/studies/:id/packet', () => {
   it('ranks the candidates, charts the chosen design and estimates exposure at the asked distance', async () => {
-    await reviewer.post(`/api/studies/${studyId}/decisions`).send({ design: { ...EDGE_MODULE, nx: 8 }, rationale: 'ok' }).expect(201);
-    const res = await engineer.get(`/api/studies/${studyId}/packet?distanceM=0.5&referenceWm2=10`);
+    await api.reviewer.post(`/api/studies/${studyId}/decisions`).send({ design: { ...EDGE_MODULE, nx: 8 }, rationale: 'ok' }).expect(201);
+    const res = await api.engineer.get(`/api/studies/${studyId}/packet?distanceM=0.5&referenceWm2=10`);
     expect(res.status).toBe(200);
     const p = res.body;
     expect(p.ranked.map((r: { label: string }) => r.label).sort()).toEqual(['Edge module A (6 elements)', 'Edge module B (8 elements)']);

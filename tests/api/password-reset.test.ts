@@ -1,70 +1,49 @@
 import request from 'supertest';
-import type { Express } from 'express';
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { createApp } from '../../server/app.ts';
-import type { AppContext } from '../../server/context.ts';
+import { describe, expect, it } from 'vitest';
 import { PasswordReset } from '../../server/entities/password-reset.ts';
-import { anonymous, authed, linkIn, seedTeam, startTestMail, type SeededTeam, type TestMail } from '../helpers/auth.ts';
-import { openTestContext, truncateAll } from '../helpers/db.ts';
+import { anonymous, authed, linkIn } from '../helpers/auth.ts';
+import { useApiTest } from '../helpers/app.ts';
 
-let ctx: AppContext;
-let mail: TestMail;
-let app: Express;
-let t: SeededTeam;
-
-beforeAll(async () => {
-  const base = await openTestContext();
-  mail = await startTestMail(base.db);
-  ctx = { ...base, mailer: mail.mailer };
-});
-afterAll(async () => {
-  await mail.close();
-  await ctx.db.destroy();
-});
-beforeEach(async () => {
-  await truncateAll(ctx.db);
-  app = createApp(ctx);
-  t = await seedTeam(ctx.db);
-});
+const api = useApiTest({ mail: true });
 
 async function ask(email: string) {
-  const { agent, csrf } = await anonymous(app);
+  const { agent, csrf } = await anonymous(api.app);
   return agent.post('/api/auth/password-reset').set('x-csrf-token', csrf).send({ email });
 }
 
 async function resetWith(token: string, password: string) {
-  const { agent, csrf } = await anonymous(app);
+  const { agent, csrf } = await anonymous(api.app);
   return agent.post(`/api/auth/password-reset/${token}`).set('x-csrf-token', csrf).send({ password });
 }
 
 describe('password reset, end to end through the fake SMTP server', () => {
   it('answers the same whether or not the address exists, and mails only a real account', async () => {
-    const known = await ask(t.engineer.email);
+    const known = await ask(api.team.engineer.email);
     const unknown = await ask('ghost@example.test');
     expect(known.status).toBe(202);
     expect(unknown.status).toBe(202);
     expect(unknown.body).toEqual(known.body);
-    const all = await mail.messages();
-    expect(all.map((m) => m.toAddresses)).toEqual([[t.engineer.email]]);
+    const all = await api.mail.messages();
+    expect(all.map((m) => m.toAddresses)).toEqual([[api.team.engineer.email]]);
   });
 
   it('the mailed link sets a new password; the old one stops working; the link cannot be reused', async () => {
-    const signedIn = await authed(app, t.engineer);
-    await ask(t.engineer.email);
-    const msg = await mail.latestTo(t.engineer.email);
+    const signedIn = await authed(api.app, api.team.engineer);
+    await ask(api.team.engineer.email);
+    const msg = await api.mail.latestTo(api.team.engineer.email);
     expect(msg.subject).toBe('Reset your Lobewise password');
     const { url, token } = linkIn(msg.textBody, '/reset/');
     expect(url).toMatch(/^http:\/\/127\.0\.0\.1:\d+\/reset\//); // loopback Host header from supertest
 
-    expect((await request(app).get(`/api/auth/password-reset/${token}`)).body).toEqual({ email: t.engineer.email });
+    expect((await request(api.app).get(`/api/auth/password-reset/${token}`)).body).toEqual({ email: api.team.engineer.email });
     expect((await resetWith(token, 'fresh-password-42')).status).toBe(204);
 
     // Sessions opened with the old password are ended.
     expect((await signedIn.get('/api/me')).status).toBe(401);
-    const { agent, csrf } = await anonymous(app);
-    const old = await agent.post('/api/auth/login').set('x-csrf-token', csrf).send({ email: t.engineer.email, password: t.engineer.password });
+    const { agent, csrf } = await anonymous(api.app);
+    const old = await agent.post('/api/auth/login').set('x-csrf-token', csrf).send({ email: api.team.engineer.email, password: api.team.engineer.password });
     expect(old.status).toBe(401);
-    expect((await authed(app, { email: t.engineer.email, password: 'fresh-password-42' })).csrf).toBeTruthy();
+    expect((await authed(api.app, { email: api.team.engineer.email, password: 'fresh-password-42' })).csrf).toBeTruthy();
 
     const reuse = await resetWith(token, 'another-password-42');
     expect(reuse.status).toBe(410);
@@ -72,20 +51,20 @@ describe('password reset, end to end through the fake SMTP server', () => {
   });
 
   it('refuses an expired link (older than 1 hour)', async () => {
-    await ask(t.admin.email);
-    const { token } = linkIn((await mail.latestTo(t.admin.email)).textBody, '/reset/');
-    const row = await ctx.db.getRepository(PasswordReset).findOneByOrFail({ userId: t.admin.id });
+    await ask(api.team.admin.email);
+    const { token } = linkIn((await api.mail.latestTo(api.team.admin.email)).textBody, '/reset/');
+    const row = await api.ctx.db.getRepository(PasswordReset).findOneByOrFail({ userId: api.team.admin.id });
     const minutes = (row.expiresAt.getTime() - row.createdAt.getTime()) / 60_000;
     expect(minutes).toBeCloseTo(60, 0);
-    await ctx.db.getRepository(PasswordReset).update({ id: row.id }, { expiresAt: new Date(Date.now() - 1) });
+    await api.ctx.db.getRepository(PasswordReset).update({ id: row.id }, { expiresAt: new Date(Date.now() - 1) });
     const res = await resetWith(token, 'fresh-password-42');
     expect(res.status).toBe(410);
     expect(res.body.error).toEqual({ code: 'link_expired', message: 'This password reset link has expired; ask for a new one.' });
   });
 
   it('refuses a weak new password with a clear message', async () => {
-    await ask(t.admin.email);
-    const { token } = linkIn((await mail.latestTo(t.admin.email)).textBody, '/reset/');
+    await ask(api.team.admin.email);
+    const { token } = linkIn((await api.mail.latestTo(api.team.admin.email)).textBody, '/reset/');
     const res = await resetWith(token, '123456789');
     expect(res.status).toBe(400);
     expect(res.body.error.message).toBe('password: must be at least 10 characters');
@@ -94,20 +73,20 @@ describe('password reset, end to end through the fake SMTP server', () => {
 
 describe('PUT /api/account/password', () => {
   it('needs the current password and a strong new one', async () => {
-    const client = await authed(app, t.reviewer);
+    const client = await authed(api.app, api.team.reviewer);
     const wrong = await client.put('/api/account/password').send({ currentPassword: 'nope-nope-nope', newPassword: 'brand-new-password' });
     expect(wrong.status).toBe(400);
     expect(wrong.body.error.message).toBe('currentPassword: is not your current password');
-    const weak = await client.put('/api/account/password').send({ currentPassword: t.reviewer.password, newPassword: 'short' });
+    const weak = await client.put('/api/account/password').send({ currentPassword: api.team.reviewer.password, newPassword: 'short' });
     expect(weak.body.error.message).toBe('newPassword: must be at least 10 characters');
-    const ok = await client.put('/api/account/password').send({ currentPassword: t.reviewer.password, newPassword: 'brand-new-password' });
+    const ok = await client.put('/api/account/password').send({ currentPassword: api.team.reviewer.password, newPassword: 'brand-new-password' });
     expect(ok.status).toBe(204);
     expect((await client.get('/api/me')).status).toBe(200); // this session stays signed in
-    await authed(app, { email: t.reviewer.email, password: 'brand-new-password' });
+    await authed(api.app, { email: api.team.reviewer.email, password: 'brand-new-password' });
   });
 
   it('PATCH /api/account renames the user', async () => {
-    const client = await authed(app, t.reviewer);
+    const client = await authed(api.app, api.team.reviewer);
     const res = await client.patch('/api/account').send({ name: '  Ona Vell ' });
     expect(res.status).toBe(200);
     expect(res.body.user.name).toBe('Ona Vell');

@@ -1,26 +1,19 @@
-import type { Express } from 'express';
 import request from 'supertest';
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { createApp } from '../../server/app.ts';
-import type { AppContext } from '../../server/context.ts';
+import { beforeEach, describe, expect, it } from 'vitest';
 import { RangeUpload } from '../../server/entities/range-upload.ts';
-import { authed, seedTeam, type AuthedClient } from '../helpers/auth.ts';
-import { openTestContext, truncateAll } from '../helpers/db.ts';
+import type { AuthedClient } from '../helpers/auth.ts';
+import { useApiTest } from '../helpers/app.ts';
 import { appliedPhaseRad, beamCodes } from '../../shared/bench/beam-codes.ts';
 import { benchModel } from '../../shared/bench/bench-model.ts';
 import { modelCutDb } from '../../shared/bench/model-cut.ts';
 import { gaussian, mulberry32 } from '../../shared/bench/random.ts';
 import { DesignSchema } from '../../shared/schemas/design.ts';
 
-let ctx: AppContext;
-let app: Express;
-let engineer: AuthedClient;
-let reviewer: AuthedClient;
-let outsider: AuthedClient;
+const UPLOAD_LIMIT = 20_000;
+const api = useApiTest({ env: { UPLOAD_LIMIT_BYTES: String(UPLOAD_LIMIT) }, appPerFile: true, signIn: ['engineer', 'reviewer', 'outsider'] });
 let studyId: string;
 let candidateId: string;
 
-const UPLOAD_LIMIT = 20_000;
 const design = { frequencyGHz: 28, nx: 8, dxMm: 5.35, phaseBits: 6, grouping: 'column', element: { kind: 'cosine', q: 1.5 } };
 
 /** The model cut of a beam plus seeded 0.3 dB noise, as a semicolon/decimal-comma file. */
@@ -34,22 +27,11 @@ function measured(azDeg: number, seed: number): Buffer {
   return Buffer.from(`angle;power_dBm\n${lines.join('\n')}\n`);
 }
 
-const count = () => ctx.db.getRepository(RangeUpload).count();
+const count = () => api.ctx.db.getRepository(RangeUpload).count();
 
-beforeAll(async () => {
-  ctx = await openTestContext({ UPLOAD_LIMIT_BYTES: String(UPLOAD_LIMIT) });
-  app = createApp(ctx);
-});
-afterAll(async () => {
-  await ctx.db.destroy();
-});
 beforeEach(async () => {
-  await truncateAll(ctx.db);
-  const team = await seedTeam(ctx.db);
-  const other = await seedTeam(ctx.db);
-  [engineer, reviewer, outsider] = await Promise.all([authed(app, team.engineer), authed(app, team.reviewer), authed(app, other.engineer)]);
-  studyId = (await engineer.post('/api/studies').send({ name: 'Module on the range' })).body.id;
-  candidateId = (await engineer.post(`/api/studies/${studyId}/candidates`).send({ name: 'Eight column', design })).body.id;
+  studyId = (await api.engineer.post('/api/studies').send({ name: 'Module on the range' })).body.id;
+  candidateId = (await api.engineer.post(`/api/studies/${studyId}/candidates`).send({ name: 'Eight column', design })).body.id;
 });
 
 const upload = (client: AuthedClient, file: Buffer, fields: Record<string, string>, name = 'run.csv') => {
@@ -61,7 +43,7 @@ const upload = (client: AuthedClient, file: Buffer, fields: Record<string, strin
 describe('POST /api/candidates/:id/range-data', () => {
   it('stores the upload with its analysis beside the model, and keeps the raw file byte for byte', async () => {
     const file = measured(30, 1);
-    const res = await upload(engineer, file, { azDeg: '30', setName: 'Module 7 scan' }, 'm7-30deg.csv');
+    const res = await upload(api.engineer, file, { azDeg: '30', setName: 'Module 7 scan' }, 'm7-30deg.csv');
     expect(res.status).toBe(201);
     // No codes sent: the upload records the codes computed for the beam.
     expect(res.body.beam).toEqual({ azDeg: 30, elDeg: 0, codes: beamCodes(DesignSchema.parse(design), { azDeg: 30, elDeg: 0 }) });
@@ -70,7 +52,7 @@ describe('POST /api/candidates/:id/range-data', () => {
     expect(Math.abs(cut.difference.peakDeg)).toBeLessThan(0.6);
     expect(Math.abs(cut.difference.hpbwDeg)).toBeLessThan(0.05 * cut.model.hpbwDeg);
     expect(res.body.parsed.unit).toBe('dBm');
-    const raw = await reviewer.get(`/api/range-data/${res.body.id}/raw`).buffer(true).parse((r, cb) => {
+    const raw = await api.reviewer.get(`/api/range-data/${res.body.id}/raw`).buffer(true).parse((r, cb) => {
       const chunks: Buffer[] = [];
       r.on('data', (c: Buffer) => chunks.push(c));
       r.on('end', () => cb(null, Buffer.concat(chunks)));
@@ -78,7 +60,7 @@ describe('POST /api/candidates/:id/range-data', () => {
     expect(raw.status).toBe(200);
     expect(raw.headers['content-disposition']).toMatch(/m7-30deg\.csv/);
     expect(Buffer.compare(raw.body as Buffer, file)).toBe(0);
-    const one = await reviewer.get(`/api/range-data/${res.body.id}`);
+    const one = await api.reviewer.get(`/api/range-data/${res.body.id}`);
     expect(one.body.analysis.cuts[0].modelCut.angleDeg.length).toBeGreaterThan(100);
     expect(one.body.parsed.angleDeg).toHaveLength(181);
   });
@@ -91,7 +73,7 @@ describe('POST /api/candidates/:id/range-data', () => {
     ['a repeated angle', Buffer.from('0;-1\n1;-2\n1;-3\n2;-4\n3;-5\n'), 'file: line 3: angle 1 repeats the line before'],
   ])('refuses %s with the line and the reason, and saves nothing', async (_name, file, message) => {
     const before = await count();
-    const res = await upload(engineer, file, { azDeg: '0' });
+    const res = await upload(api.engineer, file, { azDeg: '0' });
     expect(res.status).toBe(400);
     expect(res.body.error.message).toBe(message);
     expect(res.body.error.fields[0].field).toBe('file');
@@ -99,12 +81,12 @@ describe('POST /api/candidates/:id/range-data', () => {
   });
 
   it('answers 400 naming the field for a missing file or bad beam fields, and saves nothing', async () => {
-    const none = await engineer.post(`/api/candidates/${candidateId}/range-data`).field('azDeg', '0');
+    const none = await api.engineer.post(`/api/candidates/${candidateId}/range-data`).field('azDeg', '0');
     expect(none.status).toBe(400);
     expect(none.body.error.message).toMatch(/^file: is required/);
-    const az = await upload(engineer, measured(0, 2), { azDeg: 'ninety' });
+    const az = await upload(api.engineer, measured(0, 2), { azDeg: 'ninety' });
     expect(az.body.error.message).toMatch(/^azDeg: must be a number from -90 to 90/);
-    const codes = await upload(engineer, measured(0, 2), { azDeg: '0', codes: '0,1,2' });
+    const codes = await upload(api.engineer, measured(0, 2), { azDeg: '0', codes: '0,1,2' });
     expect(codes.status).toBe(400);
     expect(codes.body.error.message).toBe('beam.codes: must have 8 entries, one per channel');
     expect(await count()).toBe(0);
@@ -113,19 +95,19 @@ describe('POST /api/candidates/:id/range-data', () => {
   it('answers 413 for a file over the configured limit, and saves nothing', async () => {
     const big = Buffer.from(`${Array.from({ length: 3000 }, (_, i) => `${(i / 100).toFixed(2)},-10.000`).join('\n')}\n`);
     expect(big.length).toBeGreaterThan(UPLOAD_LIMIT);
-    const res = await upload(engineer, big, { azDeg: '0' });
+    const res = await upload(api.engineer, big, { azDeg: '0' });
     expect(res.status).toBe(413);
     expect(res.body.error.message).toBe(`file: must be at most ${UPLOAD_LIMIT} bytes`);
     expect(await count()).toBe(0);
   });
 
   it('answers 507 with a clear message when the database is out of disk, never hanging', async () => {
-    const repo = ctx.db.getRepository(RangeUpload);
+    const repo = api.ctx.db.getRepository(RangeUpload);
     const save = repo.save.bind(repo);
     const full = Object.assign(new Error('could not extend file: No space left on device'), { driverError: { code: '53100' } });
     (repo as { save: unknown }).save = () => Promise.reject(full);
     try {
-      const res = await upload(engineer, measured(0, 3), { azDeg: '0' });
+      const res = await upload(api.engineer, measured(0, 3), { azDeg: '0' });
       expect(res.status).toBe(507);
       expect(res.body.error.code).toBe('insufficient_storage');
       expect(res.body.error.message).toMatch(/no disk space left.*nothing was saved/);
@@ -136,29 +118,29 @@ describe('POST /api/candidates/:id/range-data', () => {
   });
 
   it('lets only engineers upload and delete; reviewers read; another team gets 404', async () => {
-    expect((await upload(reviewer, measured(0, 4), { azDeg: '0' })).status).toBe(403);
-    expect((await upload(outsider, measured(0, 4), { azDeg: '0' })).status).toBe(404);
-    const made = await upload(engineer, measured(0, 4), { azDeg: '0' });
+    expect((await upload(api.reviewer, measured(0, 4), { azDeg: '0' })).status).toBe(403);
+    expect((await upload(api.outsider, measured(0, 4), { azDeg: '0' })).status).toBe(404);
+    const made = await upload(api.engineer, measured(0, 4), { azDeg: '0' });
     const id = made.body.id as string;
-    expect((await reviewer.get(`/api/range-data/${id}`)).status).toBe(200);
-    expect((await outsider.get(`/api/range-data/${id}`)).status).toBe(404);
-    expect((await outsider.get(`/api/range-data/${id}/raw`)).status).toBe(404);
-    expect((await outsider.get(`/api/studies/${studyId}/range-data`)).status).toBe(404);
-    expect((await request(app).get(`/api/range-data/${id}`)).status).toBe(401);
-    expect((await reviewer.delete(`/api/range-data/${id}`)).status).toBe(403);
-    expect((await outsider.delete(`/api/range-data/${id}`)).status).toBe(404);
-    expect((await engineer.delete(`/api/range-data/${id}`)).status).toBe(204);
-    expect((await reviewer.get(`/api/range-data/${id}`)).status).toBe(404);
+    expect((await api.reviewer.get(`/api/range-data/${id}`)).status).toBe(200);
+    expect((await api.outsider.get(`/api/range-data/${id}`)).status).toBe(404);
+    expect((await api.outsider.get(`/api/range-data/${id}/raw`)).status).toBe(404);
+    expect((await api.outsider.get(`/api/studies/${studyId}/range-data`)).status).toBe(404);
+    expect((await request(api.app).get(`/api/range-data/${id}`)).status).toBe(401);
+    expect((await api.reviewer.delete(`/api/range-data/${id}`)).status).toBe(403);
+    expect((await api.outsider.delete(`/api/range-data/${id}`)).status).toBe(404);
+    expect((await api.engineer.delete(`/api/range-data/${id}`)).status).toBe(204);
+    expect((await api.reviewer.get(`/api/range-data/${id}`)).status).toBe(404);
   });
 });
 
 describe('GET /api/studies/:id/range-data', () => {
   it('groups uploads of one module into a set ordered by intended angle, with measured and model HPBW side by side', async () => {
     for (const [az, seed] of [[60, 5], [0, 6], [30, 7]] as const) {
-      expect((await upload(engineer, measured(az, seed), { azDeg: String(az), setName: 'Module 7 scan' })).status).toBe(201);
+      expect((await upload(api.engineer, measured(az, seed), { azDeg: String(az), setName: 'Module 7 scan' })).status).toBe(201);
     }
-    await upload(engineer, measured(0, 8), { azDeg: '0', setName: 'Module 8' });
-    const res = await reviewer.get(`/api/studies/${studyId}/range-data`);
+    await upload(api.engineer, measured(0, 8), { azDeg: '0', setName: 'Module 8' });
+    const res = await api.reviewer.get(`/api/studies/${studyId}/range-data`);
     expect(res.status).toBe(200);
     const set = res.body.sets.find((s: { setName: string }) => s.setName === 'Module 7 scan');
     expect(set.uploads.map((u: { beam: { azDeg: number } }) => u.beam.azDeg)).toEqual([0, 30, 60]);

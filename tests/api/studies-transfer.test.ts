@@ -1,42 +1,20 @@
-import type { Express } from 'express';
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { createApp } from '../../server/app.ts';
-import type { AppContext } from '../../server/context.ts';
-import { authed, seedTeam, type AuthedClient } from '../helpers/auth.ts';
-import { openTestContext, truncateAll } from '../helpers/db.ts';
+import { describe, expect, it } from 'vitest';
+import { useApiTest } from '../helpers/app.ts';
 
-let ctx: AppContext;
-let app: Express;
-let engineer: AuthedClient;
-let reviewer: AuthedClient;
-let outsider: AuthedClient;
-
-beforeAll(async () => {
-  ctx = await openTestContext();
-  app = createApp(ctx);
-});
-afterAll(async () => {
-  await ctx.db.destroy();
-});
-beforeEach(async () => {
-  await truncateAll(ctx.db);
-  const team = await seedTeam(ctx.db);
-  const other = await seedTeam(ctx.db);
-  [engineer, reviewer, outsider] = await Promise.all([authed(app, team.engineer), authed(app, team.reviewer), authed(app, other.engineer)]);
-});
+const api = useApiTest({ appPerFile: true, signIn: ['engineer', 'reviewer', 'outsider'] });
 
 async function studyWithContent(): Promise<string> {
-  const id = (await engineer.post('/api/studies').send({ name: 'Small cell panel', description: 'two options' })).body.id as string;
-  await engineer.post(`/api/studies/${id}/candidates`).send({ name: '8x8 Taylor', design: { frequencyGHz: 39, nx: 8, ny: 8, dxMm: 3.8, taperX: { kind: 'taylor', sllDb: 25, nbar: 4 } } });
-  await engineer.post(`/api/studies/${id}/candidates`).send({ name: '16x16', design: { frequencyGHz: 39, nx: 16, ny: 16, dxMm: 3.8, phaseBits: 5 }, notes: 'bigger' });
-  await engineer.put(`/api/studies/${id}/target-sheet`).send({ preset: 'small-cell-39ghz', sheet: { maxChannels: 256, scanAzDeg: { min: -50, max: 50 } } });
+  const id = (await api.engineer.post('/api/studies').send({ name: 'Small cell panel', description: 'two options' })).body.id as string;
+  await api.engineer.post(`/api/studies/${id}/candidates`).send({ name: '8x8 Taylor', design: { frequencyGHz: 39, nx: 8, ny: 8, dxMm: 3.8, taperX: { kind: 'taylor', sllDb: 25, nbar: 4 } } });
+  await api.engineer.post(`/api/studies/${id}/candidates`).send({ name: '16x16', design: { frequencyGHz: 39, nx: 16, ny: 16, dxMm: 3.8, phaseBits: 5 }, notes: 'bigger' });
+  await api.engineer.put(`/api/studies/${id}/target-sheet`).send({ preset: 'small-cell-39ghz', sheet: { maxChannels: 256, scanAzDeg: { min: -50, max: 50 } } });
   return id;
 }
 
 describe('GET /api/studies/:id/export', () => {
   it('downloads the whole study as a JSON file', async () => {
     const id = await studyWithContent();
-    const res = await reviewer.get(`/api/studies/${id}/export`);
+    const res = await api.reviewer.get(`/api/studies/${id}/export`);
     expect(res.status).toBe(200);
     expect(res.headers['content-disposition']).toMatch(/^attachment; filename="?Small-cell-panel\.lobewise\.json"?$/);
     expect(res.body).toMatchObject({
@@ -54,57 +32,57 @@ describe('GET /api/studies/:id/export', () => {
   it('carries the sweep definitions and counts the sweeps in the list', async () => {
     const id = await studyWithContent();
     // A finished sweep row as the sweeps feature stores it; only its definition travels in the export.
-    await ctx.db.query(
+    await api.ctx.db.query(
       `INSERT INTO sweeps (study_id, name, grid, constraints, status, points_total, designs_total, angles_per_design, chunks_total, engine_version)
        VALUES ($1, 'pitch scan', $2, $3, 'done', 2, 2, 1, 1, 'test')`,
       [id, JSON.stringify({ frequencyGHz: 39, nx: [8, 16], dxMm: 3.8 }), JSON.stringify({ maxChannels: 256 })],
     );
-    const file = (await engineer.get(`/api/studies/${id}/export`)).body;
+    const file = (await api.engineer.get(`/api/studies/${id}/export`)).body;
     expect(file.sweeps).toEqual([{ name: 'pitch scan', grid: { frequencyGHz: 39, nx: [8, 16], dxMm: 3.8 }, constraints: { maxChannels: 256 } }]);
-    expect((await engineer.get('/api/studies')).body[0].sweepCount).toBe(1);
-    const imported = await engineer.post('/api/studies/import').send(file);
+    expect((await api.engineer.get('/api/studies')).body[0].sweepCount).toBe(1);
+    const imported = await api.engineer.post('/api/studies/import').send(file);
     expect(imported.body.sweeps).toEqual(file.sweeps);
   });
 
   it('is a 404 for another team', async () => {
     const id = await studyWithContent();
-    expect((await outsider.get(`/api/studies/${id}/export`)).status).toBe(404);
+    expect((await api.outsider.get(`/api/studies/${id}/export`)).status).toBe(404);
   });
 });
 
 describe('POST /api/studies/import', () => {
   it('round-trips: importing an export gives a new study with the same candidates and target sheet', async () => {
     const id = await studyWithContent();
-    const file = (await engineer.get(`/api/studies/${id}/export`)).body;
-    const res = await outsider.post('/api/studies/import').send(file);
+    const file = (await api.engineer.get(`/api/studies/${id}/export`)).body;
+    const res = await api.outsider.post('/api/studies/import').send(file);
     expect(res.status).toBe(201);
     expect(res.body.candidateCount).toBe(2);
     const newId = res.body.study.id as string;
     expect(newId).not.toBe(id);
-    const again = (await outsider.get(`/api/studies/${newId}/export`)).body;
+    const again = (await api.outsider.get(`/api/studies/${newId}/export`)).body;
     expect(again.study).toEqual(file.study);
     expect(again.candidates).toEqual(file.candidates);
     expect(again.targetSheet).toEqual(file.targetSheet);
     // The outsider's team now has its own copy; the original team's list is unchanged.
-    expect((await engineer.get('/api/studies')).body).toHaveLength(1);
+    expect((await api.engineer.get('/api/studies')).body).toHaveLength(1);
   });
 
   it('answers 400 naming the bad field and writes nothing', async () => {
     const id = await studyWithContent();
-    const file = (await engineer.get(`/api/studies/${id}/export`)).body;
+    const file = (await api.engineer.get(`/api/studies/${id}/export`)).body;
     file.candidates[1].design.nx = 65;
-    const res = await engineer.post('/api/studies/import').send(file);
+    const res = await api.engineer.post('/api/studies/import').send(file);
     expect(res.status).toBe(400);
     expect(res.body.error.message).toBe('candidates[1].design.nx: must be an integer from 1 to 64');
-    const [{ count }] = await ctx.db.query(`SELECT count(*)::int AS count FROM studies`);
+    const [{ count }] = await api.ctx.db.query(`SELECT count(*)::int AS count FROM studies`);
     expect(count).toBe(1);
   });
 
   it('names the field for a file that is not a study file, and for a bad target sheet', async () => {
-    const wrong = await engineer.post('/api/studies/import').send({ hello: 'world' });
+    const wrong = await api.engineer.post('/api/studies/import').send({ hello: 'world' });
     expect(wrong.status).toBe(400);
     expect(wrong.body.error.fields.map((f: { field: string }) => f.field)).toContain('format');
-    const sheet = await engineer
+    const sheet = await api.engineer
       .post('/api/studies/import')
       .send({ format: 'lobewise-study', version: 1, study: { name: 'x' }, targetSheet: { preset: null, sheet: { maxSllDb: 5 } } });
     expect(sheet.status).toBe(400);
@@ -112,7 +90,7 @@ describe('POST /api/studies/import', () => {
   });
 
   it('is refused to reviewers', async () => {
-    const res = await reviewer.post('/api/studies/import').send({ format: 'lobewise-study', version: 1, study: { name: 'x' } });
+    const res = await api.reviewer.post('/api/studies/import').send({ format: 'lobewise-study', version: 1, study: { name: 'x' } });
     expect(res.status).toBe(403);
   });
 });

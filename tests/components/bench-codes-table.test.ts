@@ -9,7 +9,7 @@ import { DesignSchema } from '@shared/schemas/design.ts';
 const design = DesignSchema.parse({ frequencyGHz: 28, nx: 4, dxMm: 5, phaseBits: 6, grouping: 'column', element: { kind: 'cosine', q: 2 } });
 
 describe('CodesTable.vue', () => {
-  it('shows one row per beam with a column per channel and the contract example codes for -30°', () => {
+  it('shows one row per beam with a column per channel and the worked-example codes for -30°', () => {
     const table = codesTable(design, parseBeamRange('-30:30:30'), { pointingThresholdDeg: 2 });
     const w = mount(CodesTable, { props: { table }, global: { plugins: [Antd] } });
     const heads = w.findAll('thead th').map((t) => t.text());

@@ -5,13 +5,10 @@ import CandidateForm from '@/components/candidate/CandidateForm.vue';
 import PitchField from '@/components/candidate/PitchField.vue';
 import TaperField from '@/components/candidate/TaperField.vue';
 import type { DesignInput } from '@shared/schemas/design.ts';
+import { stubMatchMedia } from '../helpers/jsdom.ts';
 
-// jsdom lacks matchMedia; ant-design-vue's responsive helpers call it.
 beforeEach(() => {
-  window.matchMedia ??= ((query: string) => ({
-    matches: false, media: query, onchange: null, addListener: () => undefined, removeListener: () => undefined,
-    addEventListener: () => undefined, removeEventListener: () => undefined, dispatchEvent: () => false,
-  })) as unknown as typeof window.matchMedia;
+  stubMatchMedia();
 });
 
 const base: DesignInput = { frequencyGHz: 28, nx: 4, ny: 1, dxMm: 5.35, phaseBits: 6, grouping: 'element', steerAzDeg: 30, steerElDeg: 0 };

@@ -3,15 +3,12 @@ import Antd from 'ant-design-vue';
 import { createPinia, setActivePinia } from 'pinia';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import CandidatesPanel from '@/components/candidate/CandidatesPanel.vue';
+import { json, stubMatchMedia } from '../helpers/jsdom.ts';
 
-const json = (status: number, body: unknown) => new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json' } });
 const wait = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
 beforeEach(() => {
-  window.matchMedia ??= ((query: string) => ({
-    matches: false, media: query, onchange: null, addListener: () => undefined, removeListener: () => undefined,
-    addEventListener: () => undefined, removeEventListener: () => undefined, dispatchEvent: () => false,
-  })) as unknown as typeof window.matchMedia;
+  stubMatchMedia();
   setActivePinia(createPinia());
 });
 afterEach(() => vi.unstubAllGlobals());

@@ -4,13 +4,10 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import DecisionForm from '@/components/review/DecisionForm.vue';
 import RfExposureEstimate from '@/components/review/RfExposureEstimate.vue';
 import { RF_EXPOSURE_CAUTION } from '@shared/safety/index.ts';
+import { stubMatchMedia } from '../helpers/jsdom.ts';
 
-// jsdom lacks matchMedia; ant-design-vue's responsive helpers call it.
 beforeEach(() => {
-  window.matchMedia ??= ((query: string) => ({
-    matches: false, media: query, onchange: null, addListener: () => undefined, removeListener: () => undefined,
-    addEventListener: () => undefined, removeEventListener: () => undefined, dispatchEvent: () => false,
-  })) as unknown as typeof window.matchMedia;
+  stubMatchMedia();
 });
 
 const design = { frequencyGHz: 28, nx: 8, ny: 1, dxMm: 5.35, channelPowerDbm: 10 };

@@ -4,27 +4,15 @@ import { createPinia, setActivePinia } from 'pinia';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import SignInForm from '@/components/account/SignInForm.vue';
 import { useSessionStore } from '@/stores/session';
+import { json, stubMatchMedia } from '../helpers/jsdom.ts';
 
-// jsdom lacks these; ant-design-vue's responsive helpers call them.
 beforeEach(() => {
-  window.matchMedia ??= ((query: string) => ({
-    matches: false,
-    media: query,
-    onchange: null,
-    addListener: () => undefined,
-    removeListener: () => undefined,
-    addEventListener: () => undefined,
-    removeEventListener: () => undefined,
-    dispatchEvent: () => false,
-  })) as unknown as typeof window.matchMedia;
+  stubMatchMedia();
   setActivePinia(createPinia());
 });
 afterEach(() => {
   vi.unstubAllGlobals();
 });
-
-const json = (status: number, body: unknown) =>
-  new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json' } });
 
 /** A fetch that knows only the two endpoints sign-in uses; anything else fails the test. */
 function fakeServer(login: (body: { email: string; password: string }) => Response) {
@@ -83,6 +71,16 @@ describe('SignInForm', () => {
     const wrapper = mountForm();
     await fillAndSubmit(wrapper, 'ada@example.test', 'another-guess');
     expect(wrapper.get('[data-test="sign-in-error"]').text()).toMatch(/Too many failed sign-ins/);
+    wrapper.unmount();
+  });
+
+  it("shows the server's message for a field under that field, marked as an error", async () => {
+    fakeServer(() => json(400, { error: { code: 'invalid_input', message: 'email: must be an e-mail address', fields: [{ field: 'email', message: 'must be an e-mail address' }] } }));
+    const wrapper = mountForm();
+    await fillAndSubmit(wrapper, 'ada@example.test', 'some-password');
+    const item = wrapper.get('[data-test="email"]').element.closest('.ant-form-item');
+    expect(item?.classList.contains('ant-form-item-has-error')).toBe(true);
+    expect(item?.textContent).toContain('must be an e-mail address');
     wrapper.unmount();
   });
 

@@ -2,8 +2,7 @@ import { createPinia, setActivePinia } from 'pinia';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { ApiRequestError } from '@/api/client';
 import { useStudiesStore, type StudyRow } from '@/stores/studies';
-
-const json = (status: number, body: unknown) => new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json' } });
+import { json } from '../helpers/jsdom.ts';
 
 /** A fetch that answers the listed routes only; anything else fails the test. */
 function fakeServer(routes: Record<string, (init?: RequestInit) => Response>) {

@@ -8,6 +8,7 @@ import {
   ELEMENT_OPTIONS, NUMBER_FIELDS, TAPER_OPTIONS, buildSweep, expandRange, formKeyOfServerField, numberValues, stateFromCandidate,
 } from '@/components/sweep/sweep-form';
 import { formatDuration, percentDone } from '@/components/sweep/sweep-progress';
+import { json, stubMatchMedia } from '../helpers/jsdom.ts';
 
 const spec = (key: string) => NUMBER_FIELDS.find((s) => s.key === key)!;
 const candidate = { frequencyGHz: 28, nx: 4, ny: 1, dxMm: 5.35, phaseBits: 6, element: { kind: 'cosine' as const, q: 1 }, channelPowerDbm: 10 };
@@ -95,13 +96,8 @@ class FakeEventSource {
   }
 }
 
-const json = (status: number, body: unknown) => new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json' } });
-
 beforeEach(() => {
-  window.matchMedia ??= ((query: string) => ({
-    matches: false, media: query, onchange: null, addListener: () => undefined, removeListener: () => undefined,
-    addEventListener: () => undefined, removeEventListener: () => undefined, dispatchEvent: () => false,
-  })) as unknown as typeof window.matchMedia;
+  stubMatchMedia();
   setActivePinia(createPinia());
 });
 afterEach(() => vi.unstubAllGlobals());

@@ -4,14 +4,10 @@ import { createPinia, setActivePinia } from 'pinia';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import TargetSheetEditor from '@/components/targets/TargetSheetEditor.vue';
 import { TARGET_PRESETS } from '@shared/targets/presets.ts';
-
-const json = (status: number, body: unknown) => new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json' } });
+import { json, stubMatchMedia } from '../helpers/jsdom.ts';
 
 beforeEach(() => {
-  window.matchMedia ??= ((query: string) => ({
-    matches: false, media: query, onchange: null, addListener: () => undefined, removeListener: () => undefined,
-    addEventListener: () => undefined, removeEventListener: () => undefined, dispatchEvent: () => false,
-  })) as unknown as typeof window.matchMedia;
+  stubMatchMedia();
   setActivePinia(createPinia());
 });
 afterEach(() => vi.unstubAllGlobals());

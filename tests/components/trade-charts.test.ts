@@ -5,12 +5,10 @@ import TradeScatterChart from '@/components/charts/TradeScatterChart.vue';
 import PassingDesigns from '@/components/trade/PassingDesigns.vue';
 import { HANDSET_28GHZ } from '@shared/targets/presets.ts';
 import { tradeRow } from './trade-fixtures.ts';
+import { stubMatchMedia } from '../helpers/jsdom.ts';
 
 beforeEach(() => {
-  window.matchMedia ??= ((query: string) => ({
-    matches: false, media: query, onchange: null, addListener: () => undefined, removeListener: () => undefined,
-    addEventListener: () => undefined, removeEventListener: () => undefined, dispatchEvent: () => false,
-  })) as unknown as typeof window.matchMedia;
+  stubMatchMedia();
 });
 
 const rows = [

@@ -1,6 +1,6 @@
 /**
  * Every metric against the brute-force reference in ./reference (dense sampling, zoomed grid search,
- * midpoint integration over the whole sphere), within the accuracy column of issue 3.
+ * midpoint integration over the whole sphere), within the accuracy stated for each metric (README).
  */
 import { describe, expect, it } from 'vitest';
 import { evaluateDesign } from '../../shared/engine/index.ts';
@@ -77,13 +77,13 @@ function check(design: Design, ref: ReturnType<typeof refMetrics>): void {
 describe('evaluateDesign(design) agrees with a brute-force converged reference', () => {
   const opts = { coarseDeg: 1, cutStepDeg: 0.005, naz: 900, nv: 900 };
   random.forEach((input, i) => {
-    it(`random design ${i} is within the issue's accuracy column`, () => {
+    it(`random design ${i} is within the stated accuracy`, () => {
       const d = DesignSchema.parse(input);
       check(d, refMetrics(d, opts));
     });
   });
   edge.forEach((input, i) => {
-    it(`edge design ${i} is within the issue's accuracy column`, () => {
+    it(`edge design ${i} is within the stated accuracy`, () => {
       const d = DesignSchema.parse(input);
       check(d, refMetrics(d, opts));
     });

@@ -3,7 +3,7 @@ import { evaluateDesign } from '../../shared/engine/index.ts';
 import { DesignSchema, type DesignInput } from '../../shared/schemas/design.ts';
 
 // Common practice (no published source): bench figures for a small 28 GHz handset array, 4 columns at
-// 5 mm pitch (λ ≈ 10.7 mm), 6-bit shifters. Modelled with a cosine element, q = 2; the issue allows 4° on
+// 5 mm pitch (λ ≈ 10.7 mm), 6-bit shifters. Modelled with a cosine element, q = 2; we accept 4° on
 // widths and 5° on peaks, since the element pattern (not only the codes) pulls a wide beam to broadside.
 const handset = (extra: Partial<DesignInput>) =>
   DesignSchema.parse({ frequencyGHz: 28, nx: 4, dxMm: 5, phaseBits: 6, element: { kind: 'cosine', q: 2 }, ...extra });

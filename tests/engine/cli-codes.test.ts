@@ -8,7 +8,7 @@ const FIXTURES = 'tests/fixtures/bench';
 const cli = (...args: string[]) => spawnSync(process.execPath, ['--import', 'tsx', 'server/cli/index.ts', 'codes', ...args], { encoding: 'utf8' });
 
 describe('cli codes', () => {
-  it('prints the CSV for a START:STOP:STEP azimuth range, with the contract example codes at -30°', () => {
+  it('prints the CSV for a START:STOP:STEP azimuth range, with the worked-example codes at -30°', () => {
     const r = cli('--candidate', `${FIXTURES}/handset-4col.json`, '--beams', '-30:30:30');
     expect(r.status).toBe(0);
     const lines = r.stdout.trim().split('\n');

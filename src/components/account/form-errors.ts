@@ -14,3 +14,9 @@ export function formFailure(err: unknown): FormFailure {
   }
   return { message: err instanceof Error ? err.message : String(err), fields: {} };
 }
+
+/** validate-status and help of an a-form-item, from the server's message for `field` (bind with v-bind). */
+export function fieldFeedback(failure: FormFailure | null, field: string): { validateStatus: 'error' | undefined; help: string | undefined } {
+  const help = failure?.fields[field];
+  return { validateStatus: help ? 'error' : undefined, help };
+}

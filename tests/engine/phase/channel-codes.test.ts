@@ -4,9 +4,9 @@ import { DesignSchema, type DesignInput } from '../../../shared/schemas/design.t
 
 const handset = (extra: Partial<DesignInput>) => DesignSchema.parse({ frequencyGHz: 28, nx: 4, dxMm: 5, phaseBits: 6, ...extra });
 
-// Issue 3, "Geometry and conventions": 4 columns at 5 mm, 28 GHz, 6 bits; +30° gives 0, 15, 30, 45 and
+// Phase-code rule (README, "Conventions"): 4 columns at 5 mm, 28 GHz, 6 bits; +30° gives 0, 15, 30, 45 and
 // -30° gives 0, 49, 34, 19 (round half up, non-negative mod).
-describe('channelCodes(design) follows the issue-3 code rules', () => {
+describe('channelCodes(design) follows the channel phase-code rules', () => {
   it('steer +30° on the 4-column handset array gives codes 0, 15, 30, 45', () => {
     expect(channelCodes(handset({ steerAzDeg: 30 }))).toEqual([0, 15, 30, 45]);
   });

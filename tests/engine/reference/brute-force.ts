@@ -39,7 +39,7 @@ export function refElement(design: Design): (azDeg: number, elDeg: number) => nu
   };
 }
 
-/** Codes per element from the rules, written out again independently. */
+/** Codes per element from the phase-code rules, written out again independently. */
 function refPhasesDeg(design: Design): number[] {
   const lam = C / (design.frequencyGHz * 1e9);
   const u0 = Math.sin(design.steerAzDeg * D2R) * Math.cos(design.steerElDeg * D2R);

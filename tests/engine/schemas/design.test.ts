@@ -9,9 +9,9 @@ const firstIssue = (input: unknown) => {
   return formatIssue(r.error);
 };
 
-// Issue 3, "Design" table: defaults and rules.
+// The design table (README): defaults and rules.
 describe('DesignSchema', () => {
-  it('fills every default of the issue table (dyMm = dxMm)', () => {
+  it('fills every default of the design table (dyMm = dxMm)', () => {
     expect(DesignSchema.parse(base)).toEqual({
       ...base, ny: 1, dyMm: 5, taperX: { kind: 'uniform' }, taperY: { kind: 'uniform' }, phaseBits: null, grouping: 'element',
       element: { kind: 'isotropic' }, steerAzDeg: 0, steerElDeg: 0, codes: null, channelPowerDbm: null,
