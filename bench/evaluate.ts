@@ -1,7 +1,7 @@
 /**
- * `npm run bench -- evaluate [--reps N]`: time of one full evaluation of the issue-3 candidate
+ * `npm run bench -- evaluate [--reps N]`: time of one full evaluation of the reference candidate
  * (16×16, tr38901 elements, 6-bit phase, Taylor/Taylor, steered to (40°, 10°)), and the throughput of
- * the issue-4 benchmark grid (4,992 points) evaluated in this one thread.
+ * the sweep benchmark grid (4,992 points) evaluated in this one thread.
  */
 import { performance } from 'node:perf_hooks';
 import { evaluateDesign } from '../shared/engine/index.ts';
@@ -13,7 +13,7 @@ function percentile(sorted: number[], p: number): number {
   return sorted[Math.min(sorted.length - 1, Math.floor(p * sorted.length))]!;
 }
 
-/** The issue-4 grid: 3 nx × 2 ny × 4 pitches × 4 tapers × 4 phase settings × 13 steers = 4,992 points. */
+/** The sweep benchmark grid: 3 nx × 2 ny × 4 pitches × 4 tapers × 4 phase settings × 13 steers = 4,992 points. */
 function sweepGrid(): Design[] {
   const tapers: DesignInput['taperX'][] = [
     { kind: 'uniform' },
@@ -63,6 +63,6 @@ export async function run(argv: string[]): Promise<void> {
     t = performance.now();
     for (const d of grid) evaluateDesign(d);
     const s = (performance.now() - t) / 1000;
-    process.stdout.write(`issue-4 grid, ${grid.length} points, one thread, ${pass}: ${s.toFixed(2)} s, ${Math.round(grid.length / s)} points/s\n`);
+    process.stdout.write(`sweep benchmark grid, ${grid.length} points, one thread, ${pass}: ${s.toFixed(2)} s, ${Math.round(grid.length / s)} points/s\n`);
   }
 }
