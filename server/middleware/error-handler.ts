@@ -41,8 +41,11 @@ function fromPostgres(err: PgError): ApiError | null {
   if (code === '22P02') return new ApiError(400, 'invalid_input', 'a value has the wrong format (for example an id that is not a UUID)');
   if (code === 'P0001' && /signed/i.test(err.message)) return new ApiError(409, 'conflict', err.message);
   // Server shutting down, connection lost or refused: the database is away, not the request at fault.
-  if (['57P01', '57P02', '57P03', '08006', '08001', '08003', 'ECONNREFUSED', 'ECONNRESET'].includes(code) ||
-      /Connection terminated|connection timeout/i.test(err.message)) {
+  // TypeORM releases a transaction's runner when its connection dies, so the commit then fails this way.
+  const connectionLost =
+    err.name === 'QueryRunnerAlreadyReleasedError' ||
+    /Connection terminated|connection timeout|not queryable|terminating connection/i.test(err.message);
+  if (['57P01', '57P02', '57P03', '08006', '08001', '08003', 'ECONNREFUSED', 'ECONNRESET'].includes(code) || connectionLost) {
     return new ApiError(503, 'database_unavailable', 'the database is unavailable; try again in a moment');
   }
   return null;

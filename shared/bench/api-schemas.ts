@@ -61,11 +61,10 @@ export type SquintRequest = z.output<typeof SquintRequestSchema>;
 /** Multipart fields of a range-data upload (strings on the wire). */
 const ANGLE_RULE = 'must be a number from -90 to 90 (degrees)';
 /** A form field is text: an empty one is a mistake, not zero (an absent one takes the default). */
-const formAngle = z
-  .string({ error: ANGLE_RULE })
-  .trim()
-  .min(1, ANGLE_RULE)
-  .pipe(z.coerce.number<string>({ error: ANGLE_RULE }).min(-90, ANGLE_RULE).max(90, ANGLE_RULE));
+const formAngle = z.preprocess(
+  (v) => (typeof v === 'string' ? (v.trim() === '' ? Number.NaN : Number(v)) : v),
+  z.number({ error: ANGLE_RULE }).min(-90, ANGLE_RULE).max(90, ANGLE_RULE),
+);
 
 export const RangeUploadFieldsSchema = z.object({
   azDeg: formAngle,

@@ -86,7 +86,7 @@ describe('POST /api/studies/import', () => {
       .post('/api/studies/import')
       .send({ format: 'lobewise-study', version: 1, study: { name: 'x' }, targetSheet: { preset: null, sheet: { maxSllDb: 5 } } });
     expect(sheet.status).toBe(400);
-    expect(sheet.body.error.message).toMatch(/^targetSheet\.sheet\.maxSllDb: must be a number of at most 0/);
+    expect(sheet.body.error.message).toMatch(/^targetSheet\.sheet\.maxSllDb: must be a number from -100 to 0/);
   });
 
   it('is refused to reviewers', async () => {

@@ -82,6 +82,9 @@ describe('errorHandler', () => {
     expect(await statusFor('57P01')).toBe(503);
     expect(await statusFor('ECONNREFUSED')).toBe(503);
     expect(await statusFor('42P01')).toBe(500);
+    // A transaction whose connection died mid-way fails at commit with TypeORM's released-runner error.
+    const released = Object.assign(new Error('Query runner already released. Cannot run queries anymore.'), { name: 'QueryRunnerAlreadyReleasedError' });
+    expect((await request(appWith([() => { throw released; }])).post('/thing').send({})).status).toBe(503);
   });
 });
 
