@@ -36,7 +36,8 @@ function fieldColumn(field: TradeField, opts: TradeColumnOptions): ColDef<TradeD
     sortable: server,
     filter: server && field.type === 'number' ? 'agNumberColumnFilter' : false,
     filterParams: field.type === 'number' ? NUMBER_FILTER_PARAMS : undefined,
-    type: field.type === 'number' ? 'rightAligned' : undefined,
+    // Numbers sit right in their cells; the header stays left-aligned so its filter icon follows its own label.
+    cellClass: field.type === 'number' ? 'ag-right-aligned-cell' : undefined,
     minWidth: 90,
   };
   if (field.limit) {
