@@ -141,7 +141,7 @@ const adminOnly = (status: number, otherTeam = status) => ({ anonymous: 401, rev
 export const matrix: MatrixRow[] = [
   // foundation
   { method: 'GET', path: '/api/health', ...open(200) },
-  { method: 'POST', path: '/api/evaluate', body: {}, ...open(400) },
+  { method: 'POST', path: '/api/evaluate', body: {}, ...member(400), otherTeam: 400 },
 
   // auth (reachable signed out)
   { method: 'GET', path: '/api/auth/csrf', ...open(200) },
