@@ -15,31 +15,9 @@ import { createApp } from '../../server/app.ts';
 import type { AppContext } from '../../server/context.ts';
 import { anonymous, seedTeam, signIn, type Agent } from '../helpers/auth.ts';
 import { openTestContext, truncateAll } from '../helpers/db.ts';
+import { listRoutes } from '../helpers/routes.ts';
 import { fixtures, matrix, type MatrixWorld } from './route-matrix.ts';
 
-interface Layer {
-  rawPath?: string | RegExp | (string | RegExp)[];
-  route?: { path: string; methods: Record<string, boolean> };
-  handle?: { stack?: Layer[] };
-}
-
-/** "METHOD /full/path" of every route on the app's router stack (as route-matrix.test.ts walks it). */
-function listRoutes(app: Express): string[] {
-  const out: string[] = [];
-  const walk = (stack: Layer[], prefix: string) => {
-    for (const layer of stack) {
-      if (layer.route) {
-        const path = layer.route.path === '/' && prefix !== '' ? prefix : `${prefix}${layer.route.path}`;
-        for (const m of Object.keys(layer.route.methods)) if (m !== '_all') out.push(`${m.toUpperCase()} ${path}`);
-      } else if (layer.handle?.stack) {
-        const raw = typeof layer.rawPath === 'string' ? layer.rawPath : '';
-        walk(layer.handle.stack, raw === '/' ? prefix : `${prefix}${raw}`);
-      }
-    }
-  };
-  walk((app as unknown as { router: { stack: Layer[] } }).router.stack, '');
-  return [...new Set(out)].sort();
-}
 
 type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
 type Role = 'engineer' | 'admin' | 'reviewer';
