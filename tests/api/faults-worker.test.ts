@@ -76,7 +76,7 @@ afterAll(async () => {
   await ctx?.db.destroy();
 });
 
-describe('a stand-alone worker killed mid-sweep', () => {
+describe('a stand-alone worker killed mid-sweep', { timeout: 180_000 }, () => {
   it('has its chunks taken over by a live worker; the sweep ends with exactly pointsTotal rows, no duplicates', async () => {
     const team = await seedTeam(ctx.db);
     const study = await ctx.db.getRepository(Study).save({ teamId: team.team.id, ownerId: team.engineer.id, name: 'Worker fault' });
@@ -85,17 +85,24 @@ describe('a stand-alone worker killed mid-sweep', () => {
     const { id, pointsTotal } = await createSweep(ctx, team.engineer, study.id, SweepRequestSchema.parse({ name: 'killed worker', grid: GRID }));
     expect(pointsTotal).toBe(48 * 31);
 
-    // Kill it while it holds a chunk, after it has written at least one.
-    await until('the worker to finish one chunk and hold another', () => chunks(id), (cs) =>
-      cs.some((c) => c.status === 'done' && c.worker_id === started.workerId) && cs.some((c) => c.status === 'pending' && c.claimed_by === started.workerId),
-    );
+    // Kill it while it holds a chunk, after it has written at least one. The worker is frozen (SIGSTOP) before
+    // the chunks are read, so it cannot finish the chunk it holds between the look and the kill.
+    let held: number[] = [];
+    let atKill: Awaited<ReturnType<typeof chunks>> = [];
+    for (let attempt = 0; attempt < 50 && held.length === 0; attempt++) {
+      await until('the worker to finish one chunk and hold another', () => chunks(id), (cs) =>
+        cs.some((c) => c.status === 'done' && c.worker_id === started.workerId) && cs.some((c) => c.status === 'pending' && c.claimed_by === started.workerId),
+      );
+      worker.kill('SIGSTOP');
+      atKill = await chunks(id);
+      // Claimed by a process that will no longer exist: only a take-over can finish these.
+      held = atKill.filter((c) => c.status === 'pending' && c.claimed_by === started.workerId).map((c) => c.chunk_index);
+      if (held.length === 0) worker.kill('SIGCONT');
+    }
+    expect(held.length).toBeGreaterThan(0);
     const exited = new Promise((r) => worker!.once('exit', r));
     worker.kill('SIGKILL');
     await exited;
-    const atKill = await chunks(id);
-    // Claimed by a process that no longer exists: only a take-over can finish these.
-    const held = atKill.filter((c) => c.status === 'pending' && c.claimed_by === started.workerId).map((c) => c.chunk_index);
-    expect(held.length).toBeGreaterThan(0);
     const doneByKilled = atKill.filter((c) => c.status === 'done' && c.worker_id === started.workerId).map((c) => c.chunk_index);
     const [{ points_done: doneAtKill }] = (await ctx.db.query(`SELECT points_done FROM sweeps WHERE id = $1`, [id])) as [{ points_done: number }];
     expect(doneAtKill).toBeLessThan(pointsTotal);

@@ -125,7 +125,7 @@ afterAll(async () => {
   await ctx?.db.destroy();
 });
 
-describe('a second worker process', () => {
+describe('a second worker process', { timeout: 180_000 }, () => {
   it('started with `npm run worker` takes part in a sweep beside the server', async () => {
     await startServerProcess();
     const worker = await start('npm', ['run', '--silent', 'worker'], {});
@@ -146,7 +146,7 @@ describe('a second worker process', () => {
   });
 });
 
-describe('a server killed mid-sweep', () => {
+describe('a server killed mid-sweep', { timeout: 180_000 }, () => {
   it('resumes when started again and ends with every point exactly once', async () => {
     const first = await startServerProcess();
     const { id, pointsTotal } = await newSweep('restart');
