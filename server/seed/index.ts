@@ -1,10 +1,12 @@
 /** Demo data for `npm start`: idempotent, so every start may call it. Features add their seeds here. */
 import type { AppContext } from '../context.ts';
 import { seedAccounts } from './accounts.ts';
+import { seedDemoRangeData } from './demo-range-data.ts';
 import { seedDemoStudy } from './demo-study.ts';
 
 export async function seedDemo(ctx: AppContext): Promise<void> {
   await seedAccounts(ctx);
-  await seedDemoStudy(ctx);
-  // Filled in by the accounts and workspace features.
+  const demo = await seedDemoStudy(ctx);
+  // Only with a study just made, so a restart never adds the cuts twice.
+  if (demo) await seedDemoRangeData(ctx, demo.studyId);
 }
