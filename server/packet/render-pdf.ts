@@ -33,8 +33,19 @@ function para(doc: PDFKit.PDFDocument, f: PacketFonts, text: string, opts: { bol
   doc.moveDown(0.4);
 }
 
-function identity(data: PacketData): string {
-  return `${data.study.name} · study ${data.study.id} · engine ${data.engineVersion} · ${day(data.generatedAt)}`;
+function identity(data: PacketData, name = data.study.name): string {
+  return `${name} · study ${data.study.id} · engine ${data.engineVersion} · ${day(data.generatedAt)}`;
+}
+
+/** The identity line shortened (the study name only, never the id) until it fits on one line of `width`. */
+function fittedIdentity(doc: PDFKit.PDFDocument, data: PacketData, width: number, prefix = ''): string {
+  let name = data.study.name;
+  let line = pdfText(prefix + identity(data, name));
+  while (doc.widthOfString(line) > width && name.length > 1) {
+    name = name.slice(0, -1).trimEnd();
+    line = pdfText(prefix + identity(data, `${name}…`));
+  }
+  return line;
 }
 
 /** Header and footer on every buffered page; the bottom margin is lifted so the footer does not add a page. */
@@ -46,10 +57,10 @@ function stampPages(doc: PDFKit.PDFDocument, f: PacketFonts, data: PacketData): 
     const bottom = doc.page.margins.bottom;
     doc.page.margins.bottom = 0;
     doc.font(f.regular).fontSize(7.5).fillColor(MUTED);
-    doc.text(pdfText(`Lobewise review packet · ${identity(data)}`), MARGIN.left, 28, { width, lineBreak: false, ellipsis: true });
+    doc.text(fittedIdentity(doc, data, width, 'Lobewise review packet · '), MARGIN.left, 28, { width, lineBreak: false });
     doc.save().lineWidth(0.5).strokeColor('#d5dbe3').moveTo(MARGIN.left, 42).lineTo(MARGIN.left + width, 42).stroke().restore();
     const y = doc.page.height - 36;
-    doc.text(pdfText(identity(data)), MARGIN.left, y, { width: width - 80, lineBreak: false, ellipsis: true });
+    doc.text(fittedIdentity(doc, data, width - 80), MARGIN.left, y, { width: width - 80, lineBreak: false });
     doc.text(`Page ${i - range.start + 1} of ${range.count}`, MARGIN.left + width - 80, y, { width: 80, align: 'right', lineBreak: false });
     doc.page.margins.bottom = bottom;
   }
@@ -63,37 +74,50 @@ function targetSheet(doc: PDFKit.PDFDocument, f: PacketFonts, data: PacketData):
   drawTable(doc, f, [{ title: 'Limit', width: 3 }, { title: 'Required', width: 2 }], sheet.limits.map((l) => [l.label, l.value]));
 }
 
+const RANK_COLUMNS = [
+  { title: '#', width: 0.5 },
+  { title: 'Design', width: 3 },
+  { title: 'Verdict', width: 0.9 },
+  { title: 'Channels', width: 1.3, align: 'right' as const },
+  { title: 'Aperture (mm)', width: 1.5, align: 'right' as const },
+  { title: 'Peak EIRP (dBm)', width: 1.3, align: 'right' as const },
+  { title: 'Edge EIRP (dBm)', width: 1.3, align: 'right' as const },
+  { title: 'Scan loss edge (dB)', width: 1.3, align: 'right' as const },
+  { title: 'Worst SLL (dB)', width: 1.2, align: 'right' as const },
+];
+
+function figureCells(r: { verdict: string; figures: PacketData['ranked'][number]['figures'] }): string[] {
+  return [
+    r.verdict,
+    num(r.figures.channels, 0),
+    `${num(r.figures.apertureXMm)} × ${num(r.figures.apertureYMm)}`,
+    num(r.figures.peakEirpDbm),
+    num(r.figures.edgeEirpDbm),
+    num(r.figures.scanLossEdgeDb, 2),
+    num(r.figures.worstSllDb),
+  ];
+}
+
+function subheading(doc: PDFKit.PDFDocument, f: PacketFonts, text: string): void {
+  if (doc.y > doc.page.height - MARGIN.bottom - 60) doc.addPage();
+  doc.moveDown(0.2);
+  para(doc, f, text, { bold: true });
+}
+
 function ranked(doc: PDFKit.PDFDocument, f: PacketFonts, data: PacketData): void {
   heading(doc, f, 'Ranked designs');
-  if (data.ranked.length === 0) return para(doc, f, 'The study has no candidates yet.');
   para(doc, f, `Passing designs first, then by: ${data.rankObjective}. Figures are worst cases over each design's scan.`, { color: MUTED });
-  const cols = [
-    { title: '#', width: 0.5 },
-    { title: 'Design', width: 3 },
-    { title: 'Verdict', width: 0.9 },
-    { title: 'Channels', width: 1.3, align: 'right' as const },
-    { title: 'Aperture (mm)', width: 1.5, align: 'right' as const },
-    { title: 'Peak EIRP (dBm)', width: 1.3, align: 'right' as const },
-    { title: 'Edge EIRP (dBm)', width: 1.3, align: 'right' as const },
-    { title: 'Scan loss edge (dB)', width: 1.3, align: 'right' as const },
-    { title: 'Worst SLL (dB)', width: 1.2, align: 'right' as const },
-  ];
-  drawTable(
-    doc,
-    f,
-    cols,
-    data.ranked.map((r) => [
-      String(r.rank),
-      r.label,
-      r.verdict,
-      num(r.figures.channels, 0),
-      `${num(r.figures.apertureXMm)} × ${num(r.figures.apertureYMm)}`,
-      num(r.figures.peakEirpDbm),
-      num(r.figures.edgeEirpDbm),
-      num(r.figures.scanLossEdgeDb, 2),
-      num(r.figures.worstSllDb),
-    ]),
-  );
+  subheading(doc, f, 'Candidates');
+  if (data.ranked.length === 0) para(doc, f, 'The study has no candidates yet.');
+  else drawTable(doc, f, RANK_COLUMNS, data.ranked.map((r) => [String(r.rank), r.label, ...figureCells(r)]));
+  subheading(doc, f, 'Sweep designs');
+  const s = data.sweepRanked;
+  if (!s) return para(doc, f, 'The study has no finished sweep yet.');
+  para(doc, f, s.summary, { color: MUTED });
+  if (s.rows.length === 0) return;
+  // Each label carries the sweep's long name, so the design column takes a larger share here.
+  const cols = RANK_COLUMNS.map((c) => (c.title === 'Design' ? { ...c, width: 5.2 } : c.title === 'Verdict' ? { ...c, width: 1.1 } : c));
+  drawTable(doc, f, cols, s.rows.map((r) => [String(r.rank), `${r.label}\n${r.parameters}`, ...figureCells(r)]), 8);
 }
 
 function decision(doc: PDFKit.PDFDocument, f: PacketFonts, data: PacketData): void {
@@ -155,7 +179,7 @@ function exposure(doc: PDFKit.PDFDocument, f: PacketFonts, data: PacketData): vo
   heading(doc, f, 'RF exposure: far-field estimate');
   const e = data.exposure;
   if (e) {
-    para(doc, f, 'S = EIRP / (4·pi·r²), with EIRP the chosen design’s peak EIRP over its scan.');
+    para(doc, f, `S = EIRP / (4·pi·r²), with EIRP ${data.exposureBasis ?? 'the design’s peak EIRP'}.`);
     drawTable(doc, f, [{ title: 'Quantity', width: 3 }, { title: 'Value', width: 2, align: 'right' }], [
       ['Peak EIRP', `${num(e.eirpDbm)} dBm (${num(e.eirpW, 2)} W)`],
       [`Power density at ${num(e.distanceM, 2)} m`, `${num(e.densityWm2, 3)} W/m²`],
@@ -163,7 +187,7 @@ function exposure(doc: PDFKit.PDFDocument, f: PacketFonts, data: PacketData): vo
       ['Distance at which S falls to the reference level', `${num(e.distanceToReferenceM, 3)} m`],
     ]);
   } else {
-    para(doc, f, 'No EIRP estimate: there is no signed decision with a channel power to compute EIRP from.');
+    para(doc, f, 'No EIRP estimate: no design of this study has a channel power to compute EIRP from.');
   }
   para(doc, f, `Reference level source: ${data.referenceSource}`, { color: MUTED });
   para(doc, f, data.caution, { bold: true });

@@ -39,7 +39,7 @@ export async function findSweepDesign(m: EntityManager, studyId: string, id: str
   const azMoves = new Set(frozen.map((p) => p.steerAzDeg)).size > 1;
   const elMoves = new Set(frozen.map((p) => p.steerElDeg)).size > 1;
   return {
-    label: `${row.sweep_name} #${ref.designIndex + 1}: ${designLabel(row.design)}`,
+    label: `${row.sweep_name} · design #${ref.designIndex}: ${designLabel(row.design)}`,
     params: row.design,
     metrics: {
       at: null,

@@ -8,6 +8,7 @@ import { Candidate } from '../entities/candidate.ts';
 import { TargetSheetRow } from '../entities/target-sheet.ts';
 import { Team } from '../entities/team.ts';
 import { scanDesign } from '../packet/design-scan.ts';
+import { packetOrder, rankLatestSweep, type PacketSweepRanking } from '../packet/sweep-ranking.ts';
 import { ENGINE_VERSION } from '../../shared/engine/index.ts';
 import { DesignSchema } from '../../shared/schemas/design.ts';
 import type { StudyReview } from '../../shared/schemas/review.ts';
@@ -15,7 +16,7 @@ import { exposureEstimate, REFERENCE_LEVEL_SOURCE, RF_EXPOSURE_CAUTION, type Exp
 import { scanAngleDeg, type DesignFigures } from '../../shared/targets/figures.ts';
 import { LIMIT_KEYS, LIMIT_LABELS, type LimitKey, type TargetSheet } from '../../shared/targets/sheet.ts';
 import { rowVerdict, type Verdict } from '../../shared/trade/judge.ts';
-import { compareByObjective, RANK_OBJECTIVES } from '../../shared/trade/rank.ts';
+import { RANK_OBJECTIVES } from '../../shared/trade/rank.ts';
 import type { TradeDesign, TradeParams } from '../../shared/trade/trade-design.ts';
 import { listDecisions, type DecisionView } from './decision-service.ts';
 import { getStudyReview } from './review-request-service.ts';
@@ -23,6 +24,8 @@ import { findStudyFor } from './study-access.ts';
 
 /** Ranked rows printed; a packet is read, not searched. */
 export const PACKET_MAX_RANKED = 20;
+
+export type { PacketSweepDesign, PacketSweepRanking } from '../packet/sweep-ranking.ts';
 
 export interface PacketLimit {
   key: LimitKey;
@@ -54,11 +57,18 @@ export interface PacketData {
   targetSheet: { name: string | null; preset: string | null; limits: PacketLimit[] } | null;
   rankObjective: string;
   ranked: PacketRankedDesign[];
+  /** The study's most recent finished sweep, ranked the same way; null when it has none. */
+  sweepRanked: PacketSweepRanking | null;
   decision: DecisionView | null;
   history: DecisionView[];
   chart: { label: string; axis: 'az' | 'el'; points: PacketChartPoint[] } | null;
-  /** Far-field estimate from the chosen design's peak EIRP; null without a signed decision that has an EIRP. */
+  /**
+   * Far-field estimate from the signed decision's peak EIRP or, before any sign-off, from the highest peak EIRP
+   * among the ranked designs (the worst case a reader should see); null when no design has an EIRP.
+   */
   exposure: ExposureEstimate | null;
+  /** Which EIRP the estimate uses, in words (printed beside it). */
+  exposureBasis: string | null;
   /** Always printed, with or without an estimate. */
   caution: string;
   referenceSource: string;
@@ -110,8 +120,7 @@ function rankCandidates(candidates: Candidate[], sheet: TargetSheet | null): { r
     };
     return [{ label: c.name, row, verdict: rowVerdict(row, sheet) }];
   });
-  const order: Record<Verdict, number> = { pass: 0, 'n/a': 1, fail: 2 };
-  rows.sort((a, b) => order[a.verdict] - order[b.verdict] || compareByObjective(a.row, b.row, RANK_OBJECTIVES[0]!.terms));
+  rows.sort(packetOrder);
   return {
     rows: rows.slice(0, PACKET_MAX_RANKED).map((r, i) => ({ rank: i + 1, label: r.label, verdict: r.verdict, figures: r.row.figures })),
   };
@@ -146,6 +155,21 @@ export interface PacketOptions {
   referenceWm2?: number;
 }
 
+/** The EIRP the exposure estimate rests on: the signed design's, else the highest among the ranked designs. */
+function exposureBasisOf(
+  decision: DecisionView | null,
+  designs: { label: string; figures: DesignFigures }[],
+): { eirpDbm: number; words: string } | null {
+  const signed = decision ? peakEirp(decision) : null;
+  if (signed !== null) return { eirpDbm: signed, words: 'the signed design’s peak EIRP over its scan' };
+  let top: { label: string; eirp: number } | null = null;
+  for (const d of designs) {
+    const e = d.figures.peakEirpDbm;
+    if (typeof e === 'number' && (top === null || e > top.eirp)) top = { label: d.label, eirp: e };
+  }
+  return top && { eirpDbm: top.eirp, words: `the highest peak EIRP among the ranked designs (${top.label}), as no design is signed off yet` };
+}
+
 /** Everything the packet shows, for a user who may read the study. */
 export async function buildPacket(ctx: AppContext, user: AuthUser, studyId: string, options: PacketOptions = {}): Promise<PacketData> {
   const study = await findStudyFor(ctx, user, studyId, 'read');
@@ -156,7 +180,9 @@ export async function buildPacket(ctx: AppContext, user: AuthUser, studyId: stri
   const history = await listDecisions(ctx, user, studyId);
   const decision = history.find((d) => d.status === 'signed') ?? null;
   const limits = sheet ? sheetLimits(sheet) : [];
-  const eirp = decision ? peakEirp(decision) : null;
+  const ranked = rankCandidates(candidates, sheet).rows;
+  const sweepRanked = await rankLatestSweep(ctx.db.manager, studyId, sheet);
+  const basis = exposureBasisOf(decision, [...ranked, ...(sweepRanked?.rows ?? [])]);
   return {
     study: { id: study.id, name: study.name, description: study.description, teamName: team?.name ?? '' },
     generatedAt: new Date().toISOString(),
@@ -164,11 +190,13 @@ export async function buildPacket(ctx: AppContext, user: AuthUser, studyId: stri
     job: jobParagraph(study.description, sheet?.name ?? null, limits, candidates.length),
     targetSheet: sheet ? { name: sheet.name ?? null, preset: sheetRow?.preset ?? null, limits } : null,
     rankObjective: RANK_OBJECTIVES[0]!.label,
-    ranked: rankCandidates(candidates, sheet).rows,
+    ranked,
+    sweepRanked,
     decision,
     history,
     chart: decision ? chartOf(decision) : null,
-    exposure: eirp === null ? null : exposureEstimate({ eirpDbm: eirp, distanceM: options.distanceM, referenceWm2: options.referenceWm2 }),
+    exposure: basis ? exposureEstimate({ eirpDbm: basis.eirpDbm, distanceM: options.distanceM, referenceWm2: options.referenceWm2 }) : null,
+    exposureBasis: basis?.words ?? null,
     caution: RF_EXPOSURE_CAUTION,
     referenceSource: REFERENCE_LEVEL_SOURCE,
     review: await getStudyReview(ctx, user, studyId),

@@ -3,6 +3,11 @@ import { beforeEach, describe, expect, it } from 'vitest';
 // describes the package main only, hence the cast below.
 // @ts-expect-error no declaration file for the library entry
 import pdfParseLib from 'pdf-parse/lib/pdf-parse.js';
+import { designRows, pointRow } from '../../server/sweeps/rows.ts';
+import { ENGINE_VERSION } from '../../shared/engine/index.ts';
+import { evaluateRange } from '../../shared/sweep/evaluate-range.ts';
+import { compileGrid } from '../../shared/sweep/grid.ts';
+import { SweepGridShapeSchema } from '../../shared/sweep/grid-schema.ts';
 import { HANDSET_28GHZ } from '../../shared/targets/presets.ts';
 import { authed, seedTeam, type AuthedClient } from '../helpers/auth.ts';
 import { useApiTest } from '../helpers/app.ts';
@@ -66,6 +71,18 @@ describe('GET /api/studies/:id/packet.pdf', () => {
     expect(text).toContain('This is a far-field estimate, not a compliance assessment.');
   });
 
+  it('before any sign-off estimates exposure from the highest peak EIRP among the ranked designs', async () => {
+    const res = await api.reviewer.get(`/api/studies/${studyId}/packet`).expect(200);
+    const eirps = [...res.body.ranked, ...(res.body.sweepRanked?.rows ?? [])]
+      .map((d: { figures: { peakEirpDbm: number | null } }) => d.figures.peakEirpDbm)
+      .filter((e: number | null): e is number => typeof e === 'number');
+    expect(eirps.length).toBeGreaterThan(0);
+    expect(res.body.exposure.eirpDbm).toBe(Math.max(...eirps));
+    expect(res.body.exposureBasis).toMatch(/highest peak EIRP among the ranked designs \(Edge module B/);
+    const { text } = await pdfText(api.reviewer);
+    expect(text).toContain('as no design is signed off yet');
+  });
+
   it('answers 400 for a bad distance and 404 for another team', async () => {
     const bad = await api.engineer.get(`/api/studies/${studyId}/packet.pdf?distanceM=-1`);
     expect(bad.status).toBe(400);
@@ -92,5 +109,73 @@ describe('GET /api/studies/:id/packet', () => {
     expect(p.exposure.densityWm2).toBeCloseTo(eirpW / (4 * Math.PI * 0.25), 9);
     expect(p.exposure.distanceM).toBe(0.5);
     expect(p.caution).toMatch(/not a compliance assessment/);
+  });
+});
+
+/** Stores a finished sweep of `grid` in the study, as the demo seed does; answers its id. */
+async function insertFinishedSweep(name: string, gridInput: unknown): Promise<string> {
+  const compiled = compileGrid(SweepGridShapeSchema.parse(gridInput));
+  const points = evaluateRange(compiled, 0, compiled.points);
+  const [sweep] = (await api.ctx.db.query(
+    `INSERT INTO sweeps (study_id, name, grid, constraints, status, points_total, points_done, points_failed, designs_total,
+       angles_per_design, chunks_total, engine_version, started_at, finished_at)
+     VALUES ($1, $2, $3, '{}', 'done', $4, $4, 0, $5, $6, 1, $7, now(), now()) RETURNING id`,
+    [studyId, name, JSON.stringify(gridInput), compiled.points, compiled.designs, compiled.anglesPerDesign, ENGINE_VERSION],
+  )) as { id: string }[];
+  const insert = (table: string, rows: unknown[]) =>
+    api.ctx.db.query(`INSERT INTO ${table} SELECT * FROM jsonb_populate_recordset(NULL::${table}, $1::jsonb)`, [JSON.stringify(rows)]);
+  await insert('sweep_points', points.map((p) => pointRow(sweep!.id, p)));
+  await insert('sweep_designs', designRows(sweep!.id, points));
+  return sweep!.id;
+}
+
+describe('the packet ranks the latest finished sweep', () => {
+  // Three 28 GHz edge arrays, 1 row at 5.35 mm, scanned over the sheet's −45…45°. Against the handset sheet:
+  // 6 elements are 6 × 5.35 = 32.1 mm long, past its 22 mm aperture; 2 elements at 10 dBm each fall short of its
+  // 22.4 dBm peak EIRP (array estimate P + 20·log10 N + element gain ≈ 10 + 6 + 6 = 22 dBm, common practice);
+  // 4 elements meet every limit by the engine's figures. Fewest channels alone would put the 2-element row first.
+  const grid = { frequencyGHz: 28, nx: [2, 4, 6], ny: 1, dxMm: 5.35, phaseBits: 6, element: { kind: 'cosine', q: 1 }, channelPowerDbm: 10, steerAzDeg: [-45, 0, 45] };
+  const sweepName = 'Edge row sizes at 28 GHz';
+
+  it('lists the passing sweep design first and says how many of the sweep pass', async () => {
+    // An older finished sweep that must not be the one ranked.
+    await insertFinishedSweep('Older edge sweep', { ...grid, nx: [3] });
+    await api.ctx.db.query(`UPDATE sweeps SET finished_at = now() - interval '1 day' WHERE study_id = $1`, [studyId]);
+    const sweepId = await insertFinishedSweep(sweepName, grid);
+    const index = async (nx: number) =>
+      ((await api.ctx.db.query(`SELECT design_index FROM sweep_designs WHERE sweep_id = $1 AND nx = $2`, [sweepId, nx])) as { design_index: number }[])[0]!.design_index;
+    const [two, four, six] = [await index(2), await index(4), await index(6)];
+
+    const json = (await api.engineer.get(`/api/studies/${studyId}/packet`).expect(200)).body;
+    expect(json.sweepRanked.sweepId).toBe(sweepId);
+    expect(json.sweepRanked.designs).toBe(3);
+    expect(json.sweepRanked.passing).toBe(1);
+    expect(json.sweepRanked.rows.map((r: { designIndex: number; verdict: string }) => [r.designIndex, r.verdict])).toEqual([
+      [four, 'pass'],
+      [two, 'fail'],
+      [six, 'fail'],
+    ]);
+    expect(json.sweepRanked.rows[0].parameters).toContain('4 × 1');
+    // The candidates keep their own sub-table.
+    expect(json.ranked).toHaveLength(2);
+
+    const { text, pages } = await pdfText(api.engineer);
+    expect(text).toContain(`"${sweepName}"`);
+    expect(text).toContain('3 designs in the sweep, 1 passing the target sheet');
+    const at = (label: string) => text.indexOf(label);
+    const first = `${sweepName} · design #${four}`;
+    expect(at(first)).toBeGreaterThan(-1);
+    expect(at(first)).toBeLessThan(at(`${sweepName} · design #${two}`));
+    expect(at(`${sweepName} · design #${two}`)).toBeLessThan(at(`${sweepName} · design #${six}`));
+    expect(text).toContain('4 × 1, pitch 5.35 × 5.35 mm, uniform taper, 6-bit phase, element grouping');
+    expect(text).not.toContain('Older edge sweep');
+    expect(text).toContain('Edge module A (6 elements)');
+    for (let p = 1; p <= pages; p++) expect(text).toContain(`Page ${p} of ${pages}`);
+    expect(text.split(studyId).length - 1).toBeGreaterThanOrEqual(2 * pages);
+  });
+
+  it('says so when the study has no finished sweep', async () => {
+    const { text } = await pdfText(api.engineer);
+    expect(text).toContain('The study has no finished sweep yet.');
   });
 });
