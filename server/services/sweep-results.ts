@@ -9,6 +9,7 @@ import type { PointResult as PointRow } from '../../shared/sweep/chunk.ts';
 import type { AppContext } from '../context.ts';
 import type { Sweep } from '../entities/sweep.ts';
 import { buildQuery } from './sweep-query.ts';
+import { windowedDesignsCte } from './sweep-scan-window.ts';
 
 export interface Page<T> {
   total: number;
@@ -30,11 +31,15 @@ export type DesignRow = Record<string, unknown> & { designIndex: number; design:
 
 const select = (cols: ColumnDef[]) => cols.map((c) => `${c.column} AS "${c.field}"`).join(', ');
 
+/** Design rows; with a scan window (q.scanAz / q.scanEl) their figures cover only the points steered inside it. */
 export async function listDesigns(ctx: AppContext, sweep: Sweep, q: ResultsQuery): Promise<Page<DesignRow>> {
   const { where, order, params } = buildQuery(sweep.id, q, DESIGN_COLUMNS, 'design_index');
-  const [{ total }] = (await ctx.db.query(`SELECT count(*)::int AS total FROM sweep_designs WHERE ${where}`, params)) as [{ total: number }];
+  const windowed = q.scanAz || q.scanEl;
+  const prefix = windowed ? windowedDesignsCte(q.scanAz, q.scanEl, params) : '';
+  const source = windowed ? 'windowed' : 'sweep_designs';
+  const [{ total }] = (await ctx.db.query(`${prefix}SELECT count(*)::int AS total FROM ${source} WHERE ${where}`, params)) as [{ total: number }];
   const rows = (await ctx.db.query(
-    `SELECT ${select(DESIGN_COLUMNS)}, design FROM sweep_designs WHERE ${where} ORDER BY ${order} LIMIT ${q.limit} OFFSET ${q.offset}`,
+    `${prefix}SELECT ${select(DESIGN_COLUMNS)}, design FROM ${source} WHERE ${where} ORDER BY ${order} LIMIT ${q.limit} OFFSET ${q.offset}`,
     params,
   )) as DesignRow[];
   return { total, rows };

@@ -3,6 +3,8 @@
  *   ?offset=0&limit=100&sort=scanLossEdgeDb:asc&filter[nx]=8..16&filter[grouping]=element
  *   ?filters={"peakSllDb":{"max":-20},"phaseBits":6}
  * Ranges are `min..max` with either end optional; a bare value means equality (numbers, true/false, text).
+ * Designs also take a scan window, `?scanAz=-45..45&scanEl=0..30` (degrees): the design figures are then the worst
+ * cases over the points steered inside it only.
  */
 import { z } from 'zod';
 import { DESIGN_COLUMNS, POINT_COLUMNS, type ColumnDef } from './columns.ts';
@@ -17,6 +19,26 @@ export interface ResultsQuery {
   sort: { field: string; dir: 'asc' | 'desc' } | null;
   filters: Filter[];
   designIndex: number | null;
+  /** Steering window of the design figures (designs only); null = every steering angle. */
+  scanAz?: ScanWindow | null;
+  scanEl?: ScanWindow | null;
+}
+
+/** A closed steering interval in degrees. */
+export type ScanWindow = { min: number; max: number };
+
+const SCAN_KEYS = ['scanAz', 'scanEl'] as const;
+const SCAN_RULE = 'must be a range min..max in degrees, both ends from -90 to 90, min at most max';
+
+/** `-45..45` as a window, or null when it is not one. */
+function parseScanWindow(text: string): ScanWindow | null {
+  const m = RANGE.exec(text);
+  if (!m) return null;
+  const min = parseNumber(m[1]!);
+  const max = parseNumber(m[2]!);
+  if (min === null || max === null || Number.isNaN(min) || Number.isNaN(max)) return null;
+  if (min < -90 || max > 90 || min > max) return null;
+  return { min, max };
 }
 
 const RANGE = /^\s*(-?[\d.eE+-]*)\s*\.\.\s*(-?[\d.eE+-]*)\s*$/;
@@ -64,7 +86,7 @@ function parseFilterJson(def: ColumnDef, v: unknown): Filter | string {
   return 'must be {min?, max?} or a single value';
 }
 
-function makeSchema(columns: ColumnDef[]) {
+function makeSchema(columns: ColumnDef[], withScanWindow: boolean) {
   const byField = new Map(columns.map((c) => [c.field, c]));
   const known = `one of ${columns.map((c) => c.field).join(', ')}`;
   return z
@@ -84,6 +106,15 @@ function makeSchema(columns: ColumnDef[]) {
       out.offset = int('offset', 0, 2 ** 31 - 1) ?? 0;
       out.limit = int('limit', 1, MAX_PAGE_ROWS) ?? 100;
       out.designIndex = int('designIndex', 0, 2 ** 31 - 1) ?? null;
+      if (withScanWindow) {
+        for (const key of SCAN_KEYS) {
+          const raw = q[key];
+          if (raw === undefined) continue;
+          const w = typeof raw === 'string' ? parseScanWindow(raw) : null;
+          if (w) out[key] = w;
+          else ctx.addIssue({ code: 'custom', path: [key], message: SCAN_RULE });
+        }
+      }
       if (typeof q.sort === 'string' && q.sort !== '') {
         const [field = '', dir = 'asc'] = q.sort.split(':');
         if (!byField.has(field)) ctx.addIssue({ code: 'custom', path: ['sort'], message: `"${field}" is not a sortable field; use ${known}` });
@@ -100,7 +131,7 @@ function makeSchema(columns: ColumnDef[]) {
       for (const [key, raw] of Object.entries(q)) {
         const m = /^filter\[(.+)\]$/.exec(key);
         if (m) add(m[1]!, (def) => parseFilterText(def, String(raw)), ['filter', m[1]!]);
-        else if (!['offset', 'limit', 'sort', 'filters', 'designIndex'].includes(key)) {
+        else if (!['offset', 'limit', 'sort', 'filters', 'designIndex', ...(withScanWindow ? SCAN_KEYS : [])].includes(key)) {
           ctx.addIssue({ code: 'custom', path: [key], message: 'is not a known query parameter' });
         }
       }
@@ -121,5 +152,5 @@ function makeSchema(columns: ColumnDef[]) {
     });
 }
 
-export const PointsQuerySchema = makeSchema(POINT_COLUMNS);
-export const DesignsQuerySchema = makeSchema(DESIGN_COLUMNS);
+export const PointsQuerySchema = makeSchema(POINT_COLUMNS, false);
+export const DesignsQuerySchema = makeSchema(DESIGN_COLUMNS, true);

@@ -11,7 +11,7 @@ import { LIMIT_KEYS, type TargetSheet } from '@shared/targets/sheet.ts';
 import { MAX_PAGE_ROWS } from '@shared/sweep/results-query.ts';
 import { fromDesignRow, type DesignRowJson, type SteerSpan, type TradeDesign } from '@shared/trade/trade-design.ts';
 import type { PointResult } from '@shared/sweep/chunk.ts';
-import { queryString, type ViewQuery } from '@/components/trade/trade-query';
+import { queryString, scanWindowLabel, scanWindowParams, type ViewQuery } from '@/components/trade/trade-query';
 
 /** Rows loaded for charts and ranking; beyond this the charts say they show the first rows of the current order. */
 export const CHART_ROW_CAP = 20_000;
@@ -120,10 +120,14 @@ export const useTradeStore = defineStore('trade', () => {
     return all.every(Number.isFinite) ? { azMinDeg, azMaxDeg, elMinDeg, elMaxDeg } : null;
   }
 
-  /** One page of designs in the grid's current sort and filter. */
+  /** The sheet's scan range the design figures are judged over (null = every steering angle of the sweep). */
+  const scanWindow = computed(() => scanWindowLabel(sheet.value));
+
+  /** One page of designs in the grid's current sort and filter, with figures over the sheet's scan range. */
   async function fetchPage(q: ViewQuery, offset: number, limit: number): Promise<Page<TradeDesign>> {
     if (!sweepId.value) return { rows: [], total: 0 };
-    const body = await api.get<unknown>(`/api/sweeps/${encodeURIComponent(sweepId.value)}/designs?${queryString(q, offset, limit)}`);
+    const qs = queryString(q, offset, limit, scanWindowParams(sheet.value));
+    const body = await api.get<unknown>(`/api/sweeps/${encodeURIComponent(sweepId.value)}/designs?${qs}`);
     const page = pageOf<DesignRowJson>(body);
     return { rows: page.rows.map((r) => fromDesignRow(r, span.value)), total: page.total };
   }
@@ -184,7 +188,7 @@ export const useTradeStore = defineStore('trade', () => {
   }
 
   return {
-    studyId, sweeps, sweepId, span, sheet, sheetName, selected, selectedRows, rows, rowsTotal, loading, error, view, pickedPoint,
+    studyId, sweeps, sweepId, span, sheet, sheetName, scanWindow, selected, selectedRows, rows, rowsTotal, loading, error, view, pickedPoint,
     load, openSweep, fetchPage, fetchAll, setView, pointsOf, setSelected, toggleSelected, csvUrl,
   };
 });

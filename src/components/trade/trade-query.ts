@@ -4,6 +4,7 @@
  */
 import type { SortModelItem } from 'ag-grid-community';
 import { serverKeyOf, tradeField } from '@shared/trade/trade-fields.ts';
+import type { TargetSheet } from '@shared/targets/sheet.ts';
 import { DESIGN_COL_ID } from './trade-columns';
 
 /** One number filter as AG Grid's agNumberColumnFilter reports it. */
@@ -57,4 +58,26 @@ export function queryString(q: ViewQuery, offset: number, limit: number, extra: 
   if (Object.keys(filters).length) p.set('filters', JSON.stringify(filters));
   for (const [k, v] of Object.entries(extra)) p.set(k, String(v));
   return p.toString();
+}
+
+type ScanSheet = Pick<TargetSheet, 'scanAzDeg' | 'scanElDeg'>;
+
+/**
+ * The sheet's scan range as the designs API's scan window (`scanAz=-45..45`, `scanEl=0..30`), so each design is
+ * judged only on the steering the sheet asks for. No range on the sheet: no parameters.
+ */
+export function scanWindowParams(sheet: ScanSheet | null | undefined): Record<string, string> {
+  const out: Record<string, string> = {};
+  if (sheet?.scanAzDeg) out.scanAz = `${sheet.scanAzDeg.min}..${sheet.scanAzDeg.max}`;
+  if (sheet?.scanElDeg) out.scanEl = `${sheet.scanElDeg.min}..${sheet.scanElDeg.max}`;
+  return out;
+}
+
+/** "az -45..45°, el 0..30°" for the axes the sheet restricts; null when it restricts none. */
+export function scanWindowLabel(sheet: ScanSheet | null | undefined): string | null {
+  const parts = [
+    sheet?.scanAzDeg ? `az ${sheet.scanAzDeg.min}..${sheet.scanAzDeg.max}°` : null,
+    sheet?.scanElDeg ? `el ${sheet.scanElDeg.min}..${sheet.scanElDeg.max}°` : null,
+  ].filter((p): p is string => p !== null);
+  return parts.length ? parts.join(', ') : null;
 }
