@@ -122,6 +122,10 @@ export async function run(): Promise<void> {
     await time('designs (100k): filter channels ..32, peakEirpDbm 40..; sort hpbwAzMaxDeg:asc', D({ 'filter[channels]': '..32', 'filter[peakEirpDbm]': '40..', sort: 'hpbwAzMaxDeg:asc' }));
     await time('designs (100k): filter apertureXMm ..40 (JSON filters); sort edgeEirpDbm:desc', D({ filters: '{"apertureXMm":{"max":40}}', sort: 'edgeEirpDbm:desc' }));
     await time('designs (100k): page at offset 90,000, sort directivityMaxDbi:asc', D({ offset: '90000', sort: 'directivityMaxDbi:asc' }));
+    // Sweep A's 10,000 designs judged over a target sheet's scan window: worst cases recomputed from its points.
+    const W = (q: Record<string, string>) => () => listDesigns(ctx, sweepA, DesignsQuerySchema.parse(q));
+    await time('designs (10k × 10 angles): scanAz=0..30; sort scanLossEdgeDb:desc', W({ scanAz: '0..30', sort: 'scanLossEdgeDb:desc' }));
+    await time('designs (10k × 10 angles): scanAz=0..54, filter channels ..32; sort edgeEirpDbm:desc', W({ scanAz: '0..54', 'filter[channels]': '..32', sort: 'edgeEirpDbm:desc' }));
   } finally {
     if (db.isInitialized) await db.destroy();
     await cluster.stop();
