@@ -4,6 +4,7 @@ const benches: Record<string, () => Promise<{ run: (argv: string[]) => Promise<v
   sweep: () => import('./sweep.ts'),
   results: () => import('./results.ts'),
   load: () => import('./load.ts'),
+  password: () => import('./password.ts'),
 };
 
 const [only, ...rest] = process.argv.slice(2);
