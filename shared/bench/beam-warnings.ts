@@ -1,4 +1,4 @@
-import type { BeamPrediction } from './predict-beam.ts';
+import type { BeamFigures } from '../engine/beam-figures.ts';
 
 export type BenchWarningCode = 'beam-beyond-visible' | 'grating-lobe-visible' | 'beam-clipped' | 'pointing-error';
 
@@ -8,7 +8,7 @@ export interface BenchWarning {
 }
 
 /** Warnings beside one beam; the pointing threshold is the user's (degrees), null to skip that check. */
-export function beamWarnings(p: BeamPrediction, pointingThresholdDeg: number | null): BenchWarning[] {
+export function beamWarnings(p: BeamFigures, pointingThresholdDeg: number | null): BenchWarning[] {
   const out: BenchWarning[] = [];
   if (!p.beamVisible) out.push({ code: 'beam-beyond-visible', message: 'the codes put the intended main beam beyond the visible region (past endfire)' });
   if (p.gratingLobeVisible) out.push({ code: 'grating-lobe-visible', message: 'a grating lobe lies in the visible region for this beam' });

@@ -7,7 +7,7 @@ import type { Beam } from './beam.ts';
 import { benchModel } from './bench-model.ts';
 import { offsetArrays, type Calibration, type OffsetArrays } from './calibration.ts';
 import { beamWarnings, type BenchWarning } from './beam-warnings.ts';
-import { predictBeam, type BeamPrediction } from './predict-beam.ts';
+import { beamFigures, type BeamFigures } from '../engine/beam-figures.ts';
 
 export interface CodesRow {
   azDeg: number;
@@ -32,12 +32,12 @@ export interface CodesTable {
 }
 
 /** Prediction for codes loaded into the design's channels, with the calibration gains and phases applied. */
-export function predictCodes(design: Design, codes: readonly number[], offsets: OffsetArrays | undefined, intended: Beam | null): BeamPrediction {
+export function predictCodes(design: Design, codes: readonly number[], offsets: OffsetArrays | undefined, intended: Beam | null): BeamFigures {
   const channels = channelCount(design.grouping, design.nx, design.ny);
   const model = benchModel(design, appliedPhaseRad(design, codes, offsets), channelAmplitude(offsets, channels));
   const lambdaMm = wavelengthMm(design.frequencyGHz);
   const dir = intended ? directionOf(intended.azDeg * RAD_PER_DEG, intended.elDeg * RAD_PER_DEG) : null;
-  return predictBeam(model, dir, { dx: design.dxMm / lambdaMm, dy: design.dyMm / lambdaMm });
+  return beamFigures(model, dir, { dx: design.dxMm / lambdaMm, dy: design.dyMm / lambdaMm });
 }
 
 /**

@@ -6,11 +6,11 @@ import { offsetArrays, type Calibration } from './calibration.ts';
 import { beamWarnings, type BenchWarning } from './beam-warnings.ts';
 import { modelCutDb } from './model-cut.ts';
 import { predictCodes } from './codes-table.ts';
-import type { BeamPrediction } from './predict-beam.ts';
+import type { BeamFigures } from '../engine/beam-figures.ts';
 
 export interface ManualCodesResult {
   codes: number[];
-  prediction: BeamPrediction;
+  prediction: BeamFigures;
   warnings: BenchWarning[];
   /** Az cut through the peak's el and el cut through the peak's az, -90..90°, dB relative to the peak. */
   cuts: { az: { angleDeg: number[]; powerDb: number[] }; el: { angleDeg: number[]; powerDb: number[] } };

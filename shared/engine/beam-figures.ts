@@ -1,18 +1,19 @@
 /**
- * What a loaded set of codes does: the engine's own peak search, cuts, directivity and grating-lobe
- * checks run on a bench model (codes, calibration gains and phases already in the excitations).
+ * The beam of an array model: peak search, cuts through the peak, pointing error and grating-lobe checks.
+ * evaluateDesign uses it for a design's own excitations, and the bench tools for loaded codes with
+ * calibration gains and phases already in the excitations.
  */
-import type { ArrayModel } from '../engine/array/array-model.ts';
-import { arrayPower } from '../engine/array/array-power.ts';
-import { DEG_PER_RAD } from '../engine/constants.ts';
-import { beamCuts } from '../engine/cut/beam-cuts.ts';
-import { impliedBeam } from '../engine/grating/implied-beam.ts';
-import { latticeCopyVisible } from '../engine/grating/lattice-copy-visible.ts';
-import { findPeak } from '../engine/search/find-peak.ts';
-import { refinePeak } from '../engine/search/refine-peak.ts';
-import { angleBetweenRad, directionOf, type Direction } from '../engine/units/direction.ts';
+import type { ArrayModel } from './array/array-model.ts';
+import { arrayPower } from './array/array-power.ts';
+import { DEG_PER_RAD } from './constants.ts';
+import { beamCuts } from './cut/beam-cuts.ts';
+import { impliedBeam } from './grating/implied-beam.ts';
+import { latticeCopyVisible } from './grating/lattice-copy-visible.ts';
+import { findPeak } from './search/find-peak.ts';
+import { refinePeak } from './search/refine-peak.ts';
+import { angleBetweenRad, directionOf, type Direction } from './units/direction.ts';
 
-export interface BeamPrediction {
+export interface BeamFigures {
   peakAzDeg: number;
   peakElDeg: number;
   /** Angle between the peak and the intended beam; null when no beam was intended (manual codes). */
@@ -31,9 +32,9 @@ export interface BeamPrediction {
 /**
  * Peak, pointing error, HPBW and side lobes of a model. `intended` settles peak ties and is the
  * reference of the pointing error and of grating lobes; without it (manual codes) ties go to broadside
- * and grating lobes are copies of the array factor's own maximum, as in the engine contract.
+ * and grating lobes are copies of the array factor's own maximum, by the engine's tie rules.
  */
-export function predictBeam(model: ArrayModel, intended: Direction | null, pitchWavelengths: { dx: number; dy: number }): BeamPrediction {
+export function beamFigures(model: ArrayModel, intended: Direction | null, pitchWavelengths: { dx: number; dy: number }): BeamFigures {
   const reference = intended ?? directionOf(0, 0);
   const peak = findPeak(model, reference);
   const peakDir = directionOf(peak.azRad, peak.elRad);
