@@ -8,6 +8,7 @@ import type { ResultsQuery } from '../../shared/sweep/results-query.ts';
 import type { PointResult as PointRow } from '../../shared/sweep/chunk.ts';
 import type { AppContext } from '../context.ts';
 import type { Sweep } from '../entities/sweep.ts';
+import { safeText } from '../../shared/export/safe-cell.ts';
 import { buildQuery } from './sweep-query.ts';
 import { windowedDesignsCte } from './sweep-scan-window.ts';
 
@@ -49,18 +50,31 @@ const CSV_BATCH = 2000;
 
 function csvCell(v: unknown): string {
   if (v === null || v === undefined) return '';
-  const s = typeof v === 'object' ? JSON.stringify(v) : String(v);
+  const s = typeof v === 'object' ? JSON.stringify(v) : typeof v === 'string' ? safeText(v) : String(v);
   return /[",\n\r]/.test(s) ? `"${s.replaceAll('"', '""')}"` : s;
+}
+
+/** Resolves on 'drain', rejects on 'close', and removes whichever listener did not fire (no pile-up per wait). */
+function drained(out: Writable): Promise<void> {
+  return new Promise<void>((resolve, reject) => {
+    const onDrain = () => {
+      out.off('close', onClose);
+      resolve();
+    };
+    const onClose = () => {
+      out.off('drain', onDrain);
+      reject(new Error('client went away'));
+    };
+    out.once('drain', onDrain);
+    out.once('close', onClose);
+  });
 }
 
 /** Writes every point of the sweep as CSV (parameters, metrics, codes, error) to `out`, honouring back-pressure. */
 export async function writePointsCsv(ctx: AppContext, sweep: Sweep, out: Writable): Promise<void> {
   const header = [...POINT_COLUMNS.map((c) => c.field), 'codes', 'error'];
   const write = async (text: string) => {
-    if (!out.write(text)) await new Promise<void>((resolve, reject) => {
-      out.once('drain', resolve);
-      out.once('close', () => reject(new Error('client went away')));
-    });
+    if (!out.write(text)) await drained(out);
   };
   await write(header.join(',') + '\n');
   let after = -1;

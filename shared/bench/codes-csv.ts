@@ -1,3 +1,4 @@
+import { safeText } from '../export/safe-cell.ts';
 import type { CodesTable } from './codes-table.ts';
 
 /** Fixed decimals keep the file diff-able and stop float noise (27.999999999) reaching the bench. */
@@ -9,6 +10,7 @@ function fmt(x: number, digits = 2): string {
 /**
  * The table as CSV, one row per beam: azDeg,elDeg,ch1..chN,peakAzDeg,peakElDeg,pointingErrorDeg,
  * hpbwAzDeg,hpbwElDeg,warnings; warnings are codes joined by '|' (no commas, so no quoting needed).
+ * Every cell goes through safeText, so no text a spreadsheet would run as a formula reaches the bench.
  */
 export function codesCsv(table: CodesTable): string {
   const channels = Array.from({ length: table.channels }, (_, i) => `ch${i + 1}`);
@@ -26,7 +28,9 @@ export function codesCsv(table: CodesTable): string {
         fmt(r.hpbwAzDeg),
         fmt(r.hpbwElDeg),
         r.warnings.map((w) => w.code).join('|'),
-      ].join(','),
+      ]
+        .map(safeText)
+        .join(','),
     );
   }
   return `${lines.join('\n')}\n`;

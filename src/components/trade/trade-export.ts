@@ -2,6 +2,7 @@
  * Export of the trade table's current view (its sort and filters) as CSV or as an Excel workbook.
  * The workbook is built in the browser with exceljs, loaded only when asked for (it is a large module).
  */
+import { safeCell, safeText } from '@shared/export/safe-cell.ts';
 import type { TargetSheet } from '@shared/targets/sheet.ts';
 import { rowVerdict } from '@shared/trade/judge.ts';
 import type { TradeDesign } from '@shared/trade/trade-design.ts';
@@ -23,7 +24,7 @@ export function exportTable(rows: readonly TradeDesign[], sheet: TargetSheet | n
 /** RFC 4180 quoting: a field with a comma, quote or line break is quoted, quotes doubled. */
 function csvCell(v: string | number | boolean | null): string {
   if (v === null) return '';
-  const s = typeof v === 'number' ? (Number.isFinite(v) ? String(v) : '') : String(v);
+  const s = typeof v === 'number' ? (Number.isFinite(v) ? String(v) : '') : safeText(String(v));
   return /[",\r\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
 }
 
@@ -40,9 +41,9 @@ export async function toWorkbook(t: ExportTable, sheetTitle: string): Promise<Bl
   const ws = wb.addWorksheet(sheetTitle.replace(/[[\]:*?/\\]/g, ' ').slice(0, 31) || 'Trade table', {
     views: [{ state: 'frozen', xSplit: 2, ySplit: 1 }],
   });
-  ws.addRow(t.header);
+  ws.addRow(t.header.map(safeText));
   ws.getRow(1).font = { bold: true };
-  for (const r of t.rows) ws.addRow(r.map((v) => (typeof v === 'number' && !Number.isFinite(v) ? null : v)));
+  for (const r of t.rows) ws.addRow(r.map((v) => (typeof v === 'number' && !Number.isFinite(v) ? null : safeCell(v))));
   ws.columns.forEach((c, i) => {
     c.width = Math.min(28, Math.max(10, (t.header[i] ?? '').length * 0.9));
   });
