@@ -25,13 +25,10 @@ describe('channelCodes(design) follows the channel phase-code rules', () => {
   });
   it('element grouping lists channels with x fastest: index n·nx + m', () => {
     const d = DesignSchema.parse({ frequencyGHz: 28, nx: 3, ny: 2, dxMm: 5, phaseBits: 6, steerAzDeg: 30, steerElDeg: 20 });
-    const codes = channelCodes(d)!;
-    expect(codes).toHaveLength(6);
-    // Along x within a row the codes follow the az progression; row 1 adds the el progression.
-    const lambda = 299.792458 / 28;
-    const dx = (360 * (5 / lambda) * Math.sin(Math.PI / 6) * Math.cos(Math.PI / 9)) / 5.625;
-    const dy = (360 * (5 / lambda) * Math.sin(Math.PI / 9)) / 5.625;
-    for (let n = 0; n < 2; n++) for (let m = 0; m < 3; m++) expect(codes[n * 3 + m]).toBe(((Math.floor(m * dx + n * dy + 0.5) % 64) + 64) % 64);
+    // Worked by hand: λ = 10.7069 mm; Δx = 360·(5/λ)·sin 30°·cos 20° = 78.99° = 14.042 steps of 5.625°,
+    // Δy = 360·(5/λ)·sin 20° = 57.50° = 10.222 steps. Element (m, n) is m·14.042 + n·10.222 steps:
+    // row 0: 0, 14.04, 28.08 → 0, 14, 28; row 1: 10.22, 24.26, 38.31 → 10, 24, 38.
+    expect(channelCodes(d)).toEqual([0, 14, 28, 10, 24, 38]);
   });
   it('column grouping has one code per column; row grouping one per row', () => {
     expect(channelCodes(DesignSchema.parse({ frequencyGHz: 28, nx: 4, ny: 3, dxMm: 5, phaseBits: 6, grouping: 'column', steerAzDeg: 30 }))).toEqual([0, 15, 30, 45]);
