@@ -6,6 +6,7 @@ import type { CellClassParams, ColDef, ColGroupDef, ValueFormatterParams, ValueG
 import type { TargetSheet } from '@shared/targets/sheet.ts';
 import { LIMIT_LABELS } from '@shared/targets/sheet.ts';
 import { fieldVerdict, rowVerdict } from '@shared/trade/judge.ts';
+import { designFailLines } from '@shared/trade/fail-reasons.ts';
 import type { TradeDesign } from '@shared/trade/trade-design.ts';
 import { TRADE_FIELDS, fieldTitle, formatValue, serverKeyOf, type TradeField } from '@shared/trade/trade-fields.ts';
 
@@ -63,6 +64,8 @@ export function tradeColumns(opts: TradeColumnOptions): (ColDef<TradeDesign> | C
     valueGetter: (p: ValueGetterParams<TradeDesign>) => (p.data ? rowVerdict(p.data, opts.sheet) : null),
     valueFormatter: (p: ValueFormatterParams<TradeDesign>) =>
       p.value === 'pass' ? '✓ pass' : p.value === 'fail' ? '✗ fail' : p.value === 'n/a' ? 'no sheet' : '',
+    // Hovering a fail names each failed limit with its margin.
+    tooltipValueGetter: (p) => (p.data && p.value === 'fail' ? designFailLines(p.data, opts.sheet).join('\n') : null),
     cellClassRules: {
       'row-pass': (p: CellClassParams<TradeDesign>) => p.value === 'pass',
       'row-fail': (p: CellClassParams<TradeDesign>) => p.value === 'fail',
