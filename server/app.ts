@@ -8,7 +8,9 @@ import express, { type Express } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import type { AppContext } from './context.ts';
+import { scrubRequest } from './log-redaction.ts';
 import { errorHandler } from './middleware/error-handler.ts';
+import { serveClient } from './client-static.ts';
 import { authKit } from './auth/kit.ts';
 import { apiRouter } from './routes/index.ts';
 
@@ -34,7 +36,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}): Express {
       },
     }),
   );
-  app.use(pinoHttp({ logger: ctx.log, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use(pinoHttp({ logger: ctx.log, serializers: { req: scrubRequest }, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
   app.use(express.json({ limit: ctx.config.BODY_LIMIT }));
   // Session, passport, API tokens and CSRF, before any API route.
   app.use('/api', authKit(ctx).middleware);
@@ -42,9 +44,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}): Express {
 
   const clientDir = options.clientDir;
   if (clientDir && existsSync(path.join(clientDir, 'index.html'))) {
-    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
-    // History-mode routes: every non-API GET gets the client, which shows its own 404 page.
-    app.get(/^(?!\/api\/).*/, (_req, res) => res.sendFile(path.join(clientDir, 'index.html')));
+    serveClient(app, clientDir);
   }
   app.use(errorHandler(ctx.log));
   return app;

@@ -1,6 +1,7 @@
 import type { ErrorRequestHandler } from 'express';
 import type { Logger } from 'pino';
 import { ApiError } from '../errors.ts';
+import { scrubUrl } from '../log-redaction.ts';
 
 interface BodyParserError extends Error {
   type?: string;
@@ -71,7 +72,7 @@ export function errorHandler(log: Logger): ErrorRequestHandler {
       });
       return;
     }
-    log.error({ err, method: req.method, url: req.originalUrl }, 'unhandled error');
+    log.error({ err, method: req.method, url: scrubUrl(req.originalUrl) }, 'unhandled error');
     res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side; it has been logged.' } });
   };
 }
