@@ -13,6 +13,7 @@ import type { CalibrationChoice, CodesCsvQuery, CodesRequest, ManualCodesRequest
 import { BenchInputError } from '../../shared/bench/bench-input-error.ts';
 import { BeamListSchema, type Beam } from '../../shared/bench/beam.ts';
 import { beamSquint, type SquintResult } from '../../shared/bench/beam-squint.ts';
+import { squintBandRule } from '../../shared/bench/squint-band.ts';
 import { offsetArrays, type Calibration as Offsets } from '../../shared/bench/calibration.ts';
 import { codesCsv } from '../../shared/bench/codes-csv.ts';
 import { codesTable, type CodesTable } from '../../shared/bench/codes-table.ts';
@@ -145,6 +146,8 @@ export async function squintFor(ctx: AppContext, user: AuthUser, id: string, req
   const band = preset ? { id: preset.id, lowGHz: preset.lowGHz, highGHz: preset.highGHz, source: preset.source } : { id: null, ...(req.band as { lowGHz: number; highGHz: number }), source: null };
   if (!(band.highGHz > band.lowGHz)) throw invalidInput([{ field: 'band.highGHz', message: 'must be above lowGHz' }]);
   const design = designOf(candidate);
+  const outside = squintBandRule(band, design.frequencyGHz);
+  if (outside) throw invalidInput([{ field: 'band', message: outside }]);
   const calibration = await offsetsFor(ctx, id, req.calibration);
   return benchCall(() => {
     const offsets = calibration ? offsetArrays(calibration, channelCount(design.grouping, design.nx, design.ny)) : undefined;

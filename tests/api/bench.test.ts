@@ -137,6 +137,14 @@ describe('POST /api/candidates/:id/squint', () => {
     expect(res.status).toBe(400);
     expect(res.body.error.message).toMatch(/^band: must be one of n257/);
   });
+  it('refuses a band that does not contain the frequency the codes are set for (28 GHz is outside n260)', async () => {
+    const res = await api.reviewer.post(`/api/candidates/${candidateId}/squint`).send({ beam: { azDeg: 30 }, band: 'n260' });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields[0].field).toBe('band');
+    expect(res.body.error.message).toMatch(/^band: must contain 28 GHz, the frequency the codes are set for: n260 \(37–40 GHz\) does not/);
+    const custom = await api.reviewer.post(`/api/candidates/${candidateId}/squint`).send({ beam: { azDeg: 30 }, band: { lowGHz: 30, highGHz: 31 } });
+    expect(custom.status).toBe(400);
+  });
 });
 
 describe('POST /api/candidates/:id/monte-carlo', () => {
