@@ -6,6 +6,7 @@ import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { createApp } from './app.ts';
 import { destroyMonteCarloPool } from './bench/monte-carlo-pool.ts';
+import { destroyCoveragePool } from './coverage/coverage-pool.ts';
 import { loadConfig, type Config } from './config.ts';
 import type { AppContext } from './context.ts';
 import { openDatabase, type Database } from './db/database.ts';
@@ -60,6 +61,7 @@ export async function startServer(
       });
       await ctx.sweeps?.stop();
       await destroyMonteCarloPool();
+      await destroyCoveragePool();
       await mail.close();
       await database.close();
     })());

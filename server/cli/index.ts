@@ -11,6 +11,7 @@ const commands: Record<string, () => Promise<Command>> = {
   evaluate: async () => (await import('./commands/evaluate.ts')).evaluateCommand,
   sweep: async () => (await import('./commands/sweep.ts')).sweepCommand,
   codes: async () => (await import('./commands/codes.ts')).codesCommand,
+  coverage: async () => (await import('./commands/coverage.ts')).coverageCommand,
   migrate: async () => (await import('./commands/migrate.ts')).migrateCommand,
 };
 

@@ -1,0 +1,43 @@
+import type { Region } from '../schemas/coverage.ts';
+
+/** A direction (device frame, degrees) with the module and beam serving it; null where nothing radiates. */
+export interface ServedDirection {
+  azDeg: number;
+  elDeg: number;
+  eirpDbm: number | null;
+  module: number | null;
+  beam: number | null;
+}
+
+/**
+ * The sampled best-beam field for charts: cell centres of a regular az–el grid, values el-major
+ * (index = iEl·azDeg.length + iAz). EIRP rounded to 0.01 dB; null where no module radiates.
+ */
+export interface CoverageMap {
+  azStepDeg: number;
+  elStepDeg: number;
+  azDeg: number[];
+  elDeg: number[];
+  eirpDbm: (number | null)[];
+  module: (number | null)[];
+  beam: (number | null)[];
+}
+
+export interface CoverageResult {
+  region: Region;
+  /** Solid angle of the region (sr); 4π for the sphere. */
+  solidAngleSr: number;
+  /** Max EIRP over the region, located by a search that starts from the grid and each beam's steer. */
+  peakEirpDbm: number | null;
+  peakAt: ServedDirection;
+  /** Min EIRP over the region (the deepest dip between beams); null when part of it gets nothing. */
+  minEirpDbm: number | null;
+  minAt: ServedDirection;
+  /** x (dBm) such that the solid angle of the region with EIRP ≤ x is p % of the region's, keyed by String(p). */
+  eirpPercentilesDbm: Record<string, number | null>;
+  /** The solid-angle CDF at 0.5 % steps for charts: fraction of the region at or below each level. */
+  cdf: { fraction: number; eirpDbm: number }[];
+  map: CoverageMap;
+  /** Per module: conducted power and the share of the region's solid angle its beams serve best. */
+  modules: { conductedPowerDbm: number; beams: number; servedFraction: number }[];
+}

@@ -1,0 +1,8 @@
+/** Device coverage: modules on a device's faces, their codebooks and the best-beam EIRP over a region. */
+export { computeCoverage } from './compute-coverage.ts';
+export type { CoverageResult, CoverageMap, ServedDirection } from './coverage-result.ts';
+export { moduleFrame, type ModuleFrame, type Vec3 } from './module-frame.ts';
+export { deviceDirection } from './device-direction.ts';
+export { moduleAngles, deviceVectorOf } from './module-angles.ts';
+export { regionGrid } from './region-grid.ts';
+export { coveredSolidAngleSr } from './covered-solid-angle.ts';
