@@ -6,3 +6,6 @@ export { deviceDirection } from './device-direction.ts';
 export { moduleAngles, deviceVectorOf } from './module-angles.ts';
 export { regionGrid } from './region-grid.ts';
 export { coveredSolidAngleSr } from './covered-solid-angle.ts';
+export { gridCodebook, parseGridSpec } from './grid-codebook.ts';
+export { fillRegionCodebook, type FilledCodebook } from './fill-region-codebook.ts';
+export { autoStepDeg } from './auto-step-deg.ts';

@@ -46,6 +46,14 @@ interface BodySpec {
 /** A valid body per state-changing route; every leaf is then spoiled one at a time. */
 const BODIES: Record<string, BodySpec> = {
   'POST /api/evaluate': { body: () => ({ ...DESIGN }) },
+  'POST /api/coverage': {
+    body: () => ({
+      modules: [{ design: { ...DESIGN, steerAzDeg: 0 }, orientation: 'front', beams: [{ azDeg: -20, elDeg: 0 }, { azDeg: 20, elDeg: 0 }] }],
+      region: { kind: 'sector', azMinDeg: -30, azMaxDeg: 30, elMinDeg: -10, elMaxDeg: 10 },
+      percentiles: [50],
+      stepDeg: 2,
+    }),
+  },
   'POST /api/auth/login': { body: () => ({ email: 'nobody@example.test', password: 'not-the-password' }) },
   'POST /api/auth/password-reset': { body: () => ({ email: 'nobody@example.test' }) },
   'POST /api/auth/password-reset/:token': { body: () => ({ password: 'a-new-password-0123' }) },

@@ -142,6 +142,7 @@ export const matrix: MatrixRow[] = [
   // foundation
   { method: 'GET', path: '/api/health', ...open(200) },
   { method: 'POST', path: '/api/evaluate', body: {}, ...member(400), otherTeam: 400 },
+  { method: 'POST', path: '/api/coverage', body: {}, ...member(400), otherTeam: 400 },
 
   // auth (reachable signed out)
   { method: 'GET', path: '/api/auth/csrf', ...open(200) },
