@@ -8,6 +8,9 @@ export interface WarningFacts {
   pointingErrorDeg: number | null;
   hpbwAzDeg: number;
   hpbwElDeg: number;
+  /** The element gain used and what a planar lattice's unit cell supports (null for a line of elements). */
+  elementGainDbi: number;
+  unitCellGainDbi: number | null;
 }
 
 /** The warnings for one point, from facts the evaluation already measured. */
@@ -26,6 +29,12 @@ export function designWarnings(f: WarningFacts): EngineWarning[] {
   }
   if (f.pointingErrorDeg !== null && f.pointingErrorDeg > 0.5 * Math.min(f.hpbwAzDeg, f.hpbwElDeg)) {
     out.push({ code: 'peak-off-steer', message: `the pattern peak is ${f.pointingErrorDeg.toFixed(1)}° from the intended steer, more than half the beamwidth` });
+  }
+  if (f.unitCellGainDbi !== null && f.elementGainDbi > f.unitCellGainDbi + 0.05) {
+    out.push({
+      code: 'element-gain-above-unit-cell',
+      message: `the element gain ${f.elementGainDbi.toFixed(1)} dBi exceeds the ${f.unitCellGainDbi.toFixed(1)} dBi its unit cell can support (4π·dx·dy/λ²); the gain figures are optimistic`,
+    });
   }
   return out;
 }

@@ -3,10 +3,14 @@ import { arrayModel } from './array/array-model.ts';
 import { beamFigures } from './beam-figures.ts';
 import { RAD_PER_DEG } from './constants.ts';
 import { designWarnings } from './design-warnings.ts';
-import { broadsideDirectivityDbi } from './directivity/broadside-directivity.ts';
 import { directivityDbi } from './directivity/directivity-dbi.ts';
+import { conductedPowerDbm } from './gain/conducted-power-dbm.ts';
+import { elementGainDbi } from './gain/element-gain-dbi.ts';
+import { gainScale } from './gain/gain-scale.ts';
+import { unitCellGainDbi } from './gain/unit-cell-gain-dbi.ts';
 import { gratingLobeOnsetDeg } from './grating/grating-lobe-onset.ts';
 import type { Metrics } from './metrics.ts';
+import { patternPower } from './array/array-power.ts';
 import { elementPhases } from './phase/element-phases.ts';
 import { taperEfficiencyDb } from './taper/taper-efficiency.ts';
 import { taperWeights } from './taper/taper-weights.ts';
@@ -27,6 +31,14 @@ export function evaluateDesign(design: Design): Metrics {
   const directivity = directivityDbi(model, design.element, beam.peakPower);
   const sll = [beam.sllAzDb, beam.sllElDb].filter((x): x is number => x !== null);
   const channels = channelCount(design.grouping, nx, ny);
+  // Gain is the pattern power rescaled (one factor), so the peak search above serves it; toward the steer is one more sample.
+  const ge = elementGainDbi(design.element);
+  const scale = gainScale(model, ge);
+  const gain = 10 * Math.log10(scale.perPower * beam.peakPower);
+  const steerPower = design.codes !== null ? null : patternPower(model, design.steerAzDeg * RAD_PER_DEG, design.steerElDeg * RAD_PER_DEG);
+  // A steer into an element null has no finite gain; -300 dBi keeps every figure a JSON number.
+  const gainAtSteer = steerPower === null ? null : 10 * Math.log10(Math.max(scale.perPower * steerPower, 1e-30));
+  const conducted = conductedPowerDbm(design);
   return {
     peakAzDeg: beam.peakAzDeg,
     peakElDeg: beam.peakElDeg,
@@ -39,7 +51,11 @@ export function evaluateDesign(design: Design): Metrics {
     sllElDb: beam.sllElDb,
     peakSllDb: sll.length > 0 ? Math.max(...sll) : null,
     directivityDbi: directivity,
-    scanLossDb: broadsideDirectivityDbi(design) - directivity,
+    elementGainDbi: ge,
+    gainDbi: gain,
+    gainAtSteerDbi: gainAtSteer,
+    pointingLossDb: gainAtSteer === null ? null : gain - gainAtSteer,
+    scanLossDb: scale.broadsideDbi - gain,
     taperEfficiencyDb: taperEfficiencyDb(taperWeights(design.taperX, nx)) + taperEfficiencyDb(taperWeights(design.taperY, ny)),
     gratingLobeOnsetAzDeg: gratingLobeOnsetDeg(nx, dxL),
     gratingLobeOnsetElDeg: gratingLobeOnsetDeg(ny, dyL),
@@ -48,7 +64,9 @@ export function evaluateDesign(design: Design): Metrics {
     apertureXMm: nx * design.dxMm,
     apertureYMm: ny * design.dyMm,
     codes,
-    eirpDbm: design.channelPowerDbm === null ? null : design.channelPowerDbm + 10 * Math.log10(channels) + directivity,
+    conductedPowerDbm: conducted,
+    eirpDbm: conducted === null ? null : conducted + gain,
+    eirpAtSteerDbm: conducted === null || gainAtSteer === null ? null : conducted + gainAtSteer,
     warnings: designWarnings({
       beamVisible: beam.beamVisible,
       gratingLobeVisible: beam.gratingLobeVisible,
@@ -57,6 +75,8 @@ export function evaluateDesign(design: Design): Metrics {
       pointingErrorDeg: beam.pointingErrorDeg,
       hpbwAzDeg: beam.hpbwAzDeg,
       hpbwElDeg: beam.hpbwElDeg,
+      elementGainDbi: ge,
+      unitCellGainDbi: nx > 1 && ny > 1 ? unitCellGainDbi(design.dxMm, design.dyMm, lambdaMm) : null,
     }),
   };
 }

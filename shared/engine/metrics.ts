@@ -1,6 +1,6 @@
 /** One warning: a short stable code for programs and a sentence for people. */
 export interface EngineWarning {
-  code: 'beam-beyond-visible' | 'grating-lobe-visible' | 'beam-clipped' | 'peak-off-steer';
+  code: 'beam-beyond-visible' | 'grating-lobe-visible' | 'beam-clipped' | 'peak-off-steer' | 'element-gain-above-unit-cell';
   message: string;
 }
 
@@ -16,7 +16,17 @@ export interface Metrics {
   sllAzDb: number | null;
   sllElDb: number | null;
   peakSllDb: number | null;
+  /** Pattern directivity (the sphere integral), dBi; the gain figures below are what a link budget uses. */
   directivityDbi: number;
+  /** Peak embedded-element gain used, dBi (element.gainDbi or the kind's default). */
+  elementGainDbi: number;
+  /** G = G_e(û)·|AF|²/Σa² at the pattern peak, dBi. */
+  gainDbi: number;
+  /** G toward the intended steer, dBi; null with explicit codes (no steer intended). */
+  gainAtSteerDbi: number | null;
+  /** gainDbi - gainAtSteerDbi, dB; null with explicit codes. */
+  pointingLossDb: number | null;
+  /** Gain of the same array steered to broadside minus gainDbi, dB. */
   scanLossDb: number;
   taperEfficiencyDb: number;
   gratingLobeOnsetAzDeg: number | null;
@@ -26,6 +36,11 @@ export interface Metrics {
   apertureXMm: number;
   apertureYMm: number;
   codes: number[] | null;
+  /** channelPowerDbm + 10·log10(Σ a_ch²), dBm; null without channel power. */
+  conductedPowerDbm: number | null;
+  /** conductedPowerDbm + gainDbi, dBm; null without channel power. */
   eirpDbm: number | null;
+  /** conductedPowerDbm + gainAtSteerDbi, dBm; null without channel power or with explicit codes. */
+  eirpAtSteerDbm: number | null;
   warnings: EngineWarning[];
 }

@@ -3,6 +3,7 @@
  * Rule messages are written for the person who typed the value ("field: rule").
  */
 import { z } from 'zod';
+import { ElementPatternSchema } from './element-pattern.ts';
 
 /** Largest element count per axis; keeps one evaluation within interactive time. */
 export const MAX_ELEMENTS_PER_AXIS = 64;
@@ -38,12 +39,16 @@ export const TaperSchema = z.discriminatedUnion(
 );
 export type Taper = z.output<typeof TaperSchema>;
 
-const ELEMENT_RULE = 'must be an element: {kind: "isotropic" | "cosine" (with q) | "tr38901"}';
+const ELEMENT_RULE = 'must be an element: {kind: "isotropic" | "cosine" (with q) | "tr38901" | "table" (with patternId)}';
+
+const GAIN_RULE = 'must be a number from -10 to 20 (dBi, peak embedded-element gain)';
+/** Peak embedded-element gain; absent means the kind's default (see elementGainDbi in the engine). */
+const gainDbi = z.number({ error: GAIN_RULE }).min(-10, GAIN_RULE).max(20, GAIN_RULE).optional();
 
 export const ElementSchema = z.discriminatedUnion(
   'kind',
   [
-    z.object({ kind: z.literal('isotropic') }).strict(),
+    z.object({ kind: z.literal('isotropic'), gainDbi }).strict(),
     z
       .object({
         kind: z.literal('cosine'),
@@ -51,9 +56,22 @@ export const ElementSchema = z.discriminatedUnion(
           .number({ error: 'must be a number from 0 to 50 (power-pattern exponent)' })
           .min(0, 'must be a number from 0 to 50 (power-pattern exponent)')
           .max(50, 'must be a number from 0 to 50 (power-pattern exponent)'),
+        gainDbi,
       })
       .strict(),
-    z.object({ kind: z.literal('tr38901') }).strict(),
+    z.object({ kind: z.literal('tr38901'), gainDbi }).strict(),
+    // A study's uploaded pattern by id; the server (or the CLI) fills `pattern` before the engine runs.
+    z
+      .object({
+        kind: z.literal('table'),
+        patternId: z
+          .string({ error: 'must be the id of an element pattern' })
+          .min(1, 'must be the id of an element pattern')
+          .max(200, 'must be the id of an element pattern'),
+        gainDbi,
+        pattern: ElementPatternSchema.optional(),
+      })
+      .strict(),
   ],
   { error: ELEMENT_RULE },
 );
@@ -106,6 +124,17 @@ const DesignObject = z
       .max(200, 'must be a number from -200 to 200 (dBm per channel)')
       .nullable()
       .default(null),
+    // Amplitude control per channel in attenuator steps; both absent means continuous amplitude.
+    attenuatorStepDb: z
+      .number({ error: 'must be a number greater than 0 and at most 10 (dB per attenuator step)' })
+      .positive('must be a number greater than 0 and at most 10 (dB per attenuator step)')
+      .max(10, 'must be a number greater than 0 and at most 10 (dB per attenuator step)')
+      .optional(),
+    attenuatorBits: z
+      .int({ error: 'must be an integer from 1 to 12 (attenuator bits)' })
+      .min(1, 'must be an integer from 1 to 12 (attenuator bits)')
+      .max(12, 'must be an integer from 1 to 12 (attenuator bits)')
+      .optional(),
   }, { error: 'must be a design object (or an array of them)' })
   .strict();
 
@@ -126,6 +155,10 @@ export const DesignSchema = DesignObject.superRefine((d, ctx) => {
   }
   if (d.taperY.kind === 'hann' && d.ny === 2) {
     ctx.addIssue({ code: 'custom', path: ['taperY'], message: 'Hann over exactly 2 elements is all zero; choose another taper' });
+  }
+  if ((d.attenuatorStepDb === undefined) !== (d.attenuatorBits === undefined)) {
+    const missing = d.attenuatorStepDb === undefined ? 'attenuatorStepDb' : 'attenuatorBits';
+    ctx.addIssue({ code: 'custom', path: [missing], message: 'must be given together with ' + (missing === 'attenuatorBits' ? 'attenuatorStepDb' : 'attenuatorBits') + ' (both or neither)' });
   }
   if (d.codes === null) return;
   if (d.phaseBits === null) {

@@ -46,7 +46,14 @@ function randomDesign(rand: () => number): DesignInput {
 }
 
 const rand = mulberry32(20240603);
-const random: DesignInput[] = Array.from({ length: 14 }, () => randomDesign(rand));
+// Power, element gain and attenuator come from their own stream, so the geometry above stays what it was.
+const powerRand = mulberry32(20261201);
+const random: DesignInput[] = Array.from({ length: 14 }, () => {
+  const d = randomDesign(rand);
+  const attenuator = powerRand() < 0.5 ? { attenuatorStepDb: [0.25, 0.5, 1, 2][Math.floor(powerRand() * 4)]!, attenuatorBits: 3 + Math.floor(powerRand() * 4) } : {};
+  const gainDbi = powerRand() < 0.3 ? { gainDbi: Math.round(-2 + powerRand() * 10) } : {};
+  return { ...d, ...attenuator, element: { ...d.element!, ...gainDbi }, channelPowerDbm: Math.round(-5 + powerRand() * 25) };
+});
 const edge: DesignInput[] = [
   // Grating lobe in view, cosine element: the peak may be a grating lobe.
   { frequencyGHz: 28, nx: 8, ny: 2, dxMm: 0.9 * 10.7, taperX: { kind: 'uniform' }, element: { kind: 'cosine', q: 1.5 }, steerAzDeg: 50 },
@@ -56,6 +63,10 @@ const edge: DesignInput[] = [
   { frequencyGHz: 28, nx: 3, ny: 2, dxMm: 5.3, phaseBits: 3, codes: [0, 3, 6, 2, 5, 1], element: { kind: 'tr38901' } },
   // Column grouping with a 2-bit shifter.
   { frequencyGHz: 28, nx: 8, ny: 4, dxMm: 5.3, grouping: 'column', phaseBits: 2, steerAzDeg: 25, element: { kind: 'cosine', q: 2 } },
+  // Coarse attenuator on a 2-D taper with element grouping: the quantised amplitudes no longer factorise.
+  { frequencyGHz: 28, nx: 7, ny: 5, dxMm: 5.3, taperX: { kind: 'taylor', sllDb: 35, nbar: 5 }, taperY: { kind: 'hamming' }, attenuatorStepDb: 1.5, attenuatorBits: 3, element: { kind: 'tr38901' }, steerAzDeg: 40, steerElDeg: -15, channelPowerDbm: 12 },
+  // Row grouping with an attenuator and a stated element gain.
+  { frequencyGHz: 28, nx: 4, ny: 8, dxMm: 5.3, grouping: 'row', taperY: { kind: 'chebyshev', sllDb: 30 }, attenuatorStepDb: 0.5, attenuatorBits: 5, phaseBits: 4, steerElDeg: 30, element: { kind: 'cosine', q: 1.2, gainDbi: 5 }, channelPowerDbm: 8 },
 ];
 
 function check(design: Design, ref: ReturnType<typeof refMetrics>): void {
@@ -72,6 +83,20 @@ function check(design: Design, ref: ReturnType<typeof refMetrics>): void {
   if (m.sllAzDb !== null) expect(Math.abs(m.sllAzDb - ref.sllAzDb!), `sllAz ${tag}`).toBeLessThanOrEqual(0.1);
   if (m.sllElDb !== null) expect(Math.abs(m.sllElDb - ref.sllElDb!), `sllEl ${tag}`).toBeLessThanOrEqual(0.1);
   expect(Math.abs(m.directivityDbi - ref.directivityDbi), `directivity ${tag}`).toBeLessThanOrEqual(0.1);
+  expect(Math.abs(m.elementGainDbi - ref.elementGainDbi), `elementGain ${tag}`).toBeLessThanOrEqual(0.1);
+  expect(Math.abs(m.gainDbi - ref.gainDbi), `gain ${tag}`).toBeLessThanOrEqual(0.1);
+  expect(Math.abs(m.scanLossDb - ref.scanLossDb), `scanLoss ${tag}`).toBeLessThanOrEqual(0.1);
+  const nullable = [
+    ['gainAtSteerDbi', m.gainAtSteerDbi, ref.gainAtSteerDbi],
+    ['pointingLossDb', m.pointingLossDb, ref.pointingLossDb],
+    ['conductedPowerDbm', m.conductedPowerDbm, ref.conductedPowerDbm],
+    ['eirpDbm', m.eirpDbm, ref.eirpDbm],
+    ['eirpAtSteerDbm', m.eirpAtSteerDbm, ref.eirpAtSteerDbm],
+  ] as const;
+  for (const [name, got, want] of nullable) {
+    expect(got === null, `${name} null ${tag}`).toBe(want === null);
+    if (got !== null && want !== null) expect(Math.abs(got - want), `${name} ${tag}`).toBeLessThanOrEqual(0.1);
+  }
 }
 
 describe('evaluateDesign(design) agrees with a brute-force converged reference', () => {

@@ -1,6 +1,6 @@
 import type { Design } from '../../schemas/design.ts';
-import { elementFactors, elementIsFlat, elementPower, type ElementPower } from '../element/element-power.ts';
-import { taperWeights } from '../taper/taper-weights.ts';
+import { elementFactors, elementIsFlat, elementKey, elementPower, type ElementPower } from '../element/element-power.ts';
+import { elementAmplitudes } from '../gain/element-amplitudes.ts';
 import { wavelengthMm } from '../units/wavelength-mm.ts';
 
 /**
@@ -38,17 +38,17 @@ function wrapped(x: number): number {
 export function arrayModel(design: Design, phaseRad: Float64Array): ArrayModel {
   const { nx, ny } = design;
   const lambdaMm = wavelengthMm(design.frequencyGHz);
-  const tx = taperWeights(design.taperX, nx);
-  const ty = taperWeights(design.taperY, ny);
+  // Taper amplitudes after any attenuator quantisation; tx, ty null when they no longer factorise.
+  const { x: tx, y: ty, grid } = elementAmplitudes(design);
   const cRe = new Float64Array(nx * ny);
   const cIm = new Float64Array(nx * ny);
-  let separable = true;
+  let separable = tx !== null && ty !== null;
   const p00 = phaseRad[0]!;
   for (let n = 0; n < ny; n++) {
     for (let m = 0; m < nx; m++) {
       const i = n * nx + m;
       const p = phaseRad[i]!;
-      const a = tx[m]! * ty[n]!;
+      const a = grid[i]!;
       cRe[i] = a * Math.cos(p);
       cIm[i] = a * Math.sin(p);
       if (separable && wrapped(p - phaseRad[m]! - phaseRad[n * nx]! + p00) > SEPARABLE_TOL_RAD) separable = false;
@@ -58,7 +58,7 @@ export function arrayModel(design: Design, phaseRad: Float64Array): ArrayModel {
   const xIm = new Float64Array(nx);
   const yRe = new Float64Array(ny);
   const yIm = new Float64Array(ny);
-  if (separable) {
+  if (separable && tx && ty) {
     for (let m = 0; m < nx; m++) {
       xRe[m] = tx[m]! * Math.cos(phaseRad[m]!);
       xIm[m] = tx[m]! * Math.sin(phaseRad[m]!);
@@ -83,7 +83,7 @@ export function arrayModel(design: Design, phaseRad: Float64Array): ArrayModel {
     yIm,
     element: elementPower(design.element),
     elementFactors: elementFactors(design.element),
-    elementKey: JSON.stringify(design.element),
+    elementKey: elementKey(design.element),
     flatElement: elementIsFlat(design.element),
   };
 }

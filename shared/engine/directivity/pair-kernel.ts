@@ -20,6 +20,8 @@ export function pairKernel(element: Element, nx: number, ny: number, kdx: number
         return cosineKernel(nx, ny, kdx, kdy, element.q);
       case 'tr38901':
         return tr38901Kernel(nx, ny, kdx, kdy);
+      case 'table':
+        throw new RangeError('a table element has a complex kernel (tableKernel)');
     }
   });
 }

@@ -1,4 +1,5 @@
 import type { Element } from '../../schemas/design.ts';
+import { tablePatternKey, tablePower } from './table-pattern.ts';
 import { tr38901PowerAt } from './tr38901.ts';
 
 /** Element power pattern E(az, el), linear, angles in radians; az beyond ±π/2 is the back hemisphere. */
@@ -29,7 +30,19 @@ export function elementPower(element: Element): ElementPower {
         return w > 0 ? pow(w) : 0;
       };
     }
+    case 'table':
+      if (!element.pattern) throw new RangeError('element.pattern: the table element was not resolved');
+      return tablePower(element.pattern);
   }
+}
+
+/** A memo key for the element's pattern shape (a table by its values' fingerprint, not its long JSON). */
+export function elementKey(element: Element): string {
+  if (element.kind === 'table') {
+    if (!element.pattern) throw new RangeError('element.pattern: the table element was not resolved');
+    return tablePatternKey(element.pattern);
+  }
+  return JSON.stringify(element);
 }
 
 /** True when the element does not vary over the open front hemisphere (isotropic, or cosine with q = 0). */

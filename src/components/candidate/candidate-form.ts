@@ -62,6 +62,8 @@ export const ELEMENT_KINDS = [
 
 export function elementOfKind(kind: Element['kind'], previous?: Element): Element {
   if (kind === 'cosine') return { kind, q: previous?.kind === 'cosine' ? previous.q : 1.5 };
+  // An uploaded pattern is picked by id; until one is picked the form reports the empty id.
+  if (kind === 'table') return { kind, patternId: previous?.kind === 'table' ? previous.patternId : '' };
   return { kind };
 }
 

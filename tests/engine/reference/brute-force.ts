@@ -69,23 +69,65 @@ function refPhasesDeg(design: Design): number[] {
   return out;
 }
 
-export function refArray(design: Design): RefArray {
-  const lam = C / (design.frequencyGHz * 1e9);
+/** Amplitude after a channel attenuator, written out again: code = round(-20·log10(a)/step) within 0..2^bits - 1. */
+function refAttenuate(a: number, design: Design): number {
+  if (design.attenuatorStepDb === undefined || design.attenuatorBits === undefined) return a;
+  const top = Math.pow(2, design.attenuatorBits) - 1;
+  const code = a <= 0 ? top : Math.min(top, Math.max(0, Math.round((-20 * Math.log10(a)) / design.attenuatorStepDb)));
+  return Math.pow(10, (-code * design.attenuatorStepDb) / 20);
+}
+
+/** Channels as lists of the elements they feed, with the amplitude each element gets after quantisation. */
+export function refChannels(design: Design): { amplitude: number; elements: { m: number; n: number; a: number }[] }[] {
   const tx = taperWeights(design.taperX, design.nx);
   const ty = taperWeights(design.taperY, design.ny);
+  const out: { amplitude: number; elements: { m: number; n: number; a: number }[] }[] = [];
+  if (design.grouping === 'column') {
+    for (let m = 0; m < design.nx; m++) {
+      const q = refAttenuate(tx[m]!, design);
+      out.push({ amplitude: q, elements: Array.from({ length: design.ny }, (_, n) => ({ m, n, a: q * ty[n]! })) });
+    }
+  } else if (design.grouping === 'row') {
+    for (let n = 0; n < design.ny; n++) {
+      const q = refAttenuate(ty[n]!, design);
+      out.push({ amplitude: q, elements: Array.from({ length: design.nx }, (_, m) => ({ m, n, a: tx[m]! * q })) });
+    }
+  } else {
+    for (let n = 0; n < design.ny; n++) for (let m = 0; m < design.nx; m++) {
+      const q = refAttenuate(tx[m]! * ty[n]!, design);
+      out.push({ amplitude: q, elements: [{ m, n, a: q }] });
+    }
+  }
+  return out;
+}
+
+export function refArray(design: Design): RefArray {
+  const lam = C / (design.frequencyGHz * 1e9);
+  const amp = new Array<number>(design.nx * design.ny).fill(0);
+  for (const ch of refChannels(design)) for (const e of ch.elements) amp[e.n * design.nx + e.m] = e.a;
+  // Per-axis weights for the factorised direct sum; only valid when the amplitudes still factorise.
+  let tx: ArrayLike<number> = taperWeights(design.taperX, design.nx);
+  let ty: ArrayLike<number> = taperWeights(design.taperY, design.ny);
+  if (design.attenuatorStepDb !== undefined) {
+    tx = Array.from({ length: design.nx }, (_, m) => refAttenuate(taperWeights(design.taperX, design.nx)[m]!, design));
+    ty = Array.from({ length: design.ny }, (_, n) => refAttenuate(taperWeights(design.taperY, design.ny)[n]!, design));
+    if (design.grouping === 'column') ty = taperWeights(design.taperY, design.ny);
+    if (design.grouping === 'row') tx = taperWeights(design.taperX, design.nx);
+  }
+  const factorises = amp.every((a, i) => Math.abs(a - tx[i % design.nx]! * ty[Math.floor(i / design.nx)]!) <= 1e-12);
   const ph = refPhasesDeg(design);
   const a: RefArray = { xs: [], ys: [], re: [], im: [], k: (2 * Math.PI) / lam, nx: design.nx, ny: design.ny, element: refElement(design), steer: design.codes ? { az: 0, el: 0 } : { az: design.steerAzDeg, el: design.steerElDeg } };
   for (let n = 0; n < design.ny; n++) {
     for (let m = 0; m < design.nx; m++) {
       a.xs.push((m - (design.nx - 1) / 2) * design.dxMm * 1e-3);
       a.ys.push((n - (design.ny - 1) / 2) * design.dyMm * 1e-3);
-      const amp = tx[m]! * ty[n]!;
+      const am = amp[n * design.nx + m]!;
       const p = ph[n * design.nx + m]! * D2R;
-      a.re.push(amp * Math.cos(p));
-      a.im.push(amp * Math.sin(p));
+      a.re.push(am * Math.cos(p));
+      a.im.push(am * Math.sin(p));
     }
   }
-  if (design.phaseBits === null) {
+  if (design.phaseBits === null && factorises) {
     const axes = { x: [] as number[], xr: [] as number[], xi: [] as number[], y: [] as number[], yr: [] as number[], yi: [] as number[] };
     for (let m = 0; m < design.nx; m++) {
       const p = ph[m]! * D2R;
@@ -277,6 +319,31 @@ export interface RefMetrics {
   sllAzDb: number | null;
   sllElDb: number | null;
   directivityDbi: number;
+  elementGainDbi: number;
+  gainDbi: number;
+  gainAtSteerDbi: number | null;
+  pointingLossDb: number | null;
+  scanLossDb: number;
+  conductedPowerDbm: number | null;
+  eirpDbm: number | null;
+  eirpAtSteerDbm: number | null;
+}
+
+/** Element gain defaults written out again: isotropic 0, cos^q θ 2(q + 1), TR 38.901 8 dBi; element.gainDbi wins. */
+function refElementGainDbi(design: Design): number {
+  const e = design.element;
+  if (e.gainDbi !== undefined) return e.gainDbi;
+  if (e.kind === 'cosine') return 10 * Math.log10(2 * (e.q + 1));
+  if (e.kind === 'tr38901') return 8;
+  return 0;
+}
+
+/** G(az, el) = G_e0·E(az, el)/E(0, 0)·|AF|²/Σa² by direct sums over the reference array, dBi. */
+function refGainDbi(a: RefArray, ge0Dbi: number, azDeg: number, elDeg: number): number {
+  let s2 = 0;
+  for (let i = 0; i < a.re.length; i++) s2 += a.re[i]! * a.re[i]! + a.im[i]! * a.im[i]!;
+  const g = (Math.pow(10, ge0Dbi / 10) * refP(a, azDeg, elDeg)) / (a.element(0, 0) * s2);
+  return 10 * Math.log10(Math.max(g, 1e-30));
 }
 
 export function refMetrics(design: Design, opts: { coarseDeg: number; cutStepDeg: number; naz: number; nv: number }): RefMetrics {
@@ -284,7 +351,30 @@ export function refMetrics(design: Design, opts: { coarseDeg: number; cutStepDeg
   const pk = refPeak(a, opts.coarseDeg);
   const az = refCut((x) => refP(a, x, pk.el), pk.az, pk.p, opts.cutStepDeg);
   const el = refCut((x) => refP(a, pk.az, x), pk.el, pk.p, opts.cutStepDeg);
+  const ge = refElementGainDbi(design);
+  const gain = refGainDbi(a, ge, pk.az, pk.el);
+  const atSteer = design.codes ? null : refGainDbi(a, ge, design.steerAzDeg, design.steerElDeg);
+  // Broadside: the same amplitudes with every phase zero, summed directly.
+  let s1 = 0;
+  let s2 = 0;
+  for (let i = 0; i < a.re.length; i++) {
+    const m2 = a.re[i]! * a.re[i]! + a.im[i]! * a.im[i]!;
+    s1 += Math.sqrt(m2);
+    s2 += m2;
+  }
+  const broadside = ge + 10 * Math.log10((s1 * s1) / s2);
+  let chPower = 0;
+  for (const ch of refChannels(design)) chPower += ch.amplitude * ch.amplitude;
+  const conducted = design.channelPowerDbm === null ? null : design.channelPowerDbm + 10 * Math.log10(chPower);
   return {
+    elementGainDbi: ge,
+    gainDbi: gain,
+    gainAtSteerDbi: atSteer,
+    pointingLossDb: atSteer === null ? null : gain - atSteer,
+    scanLossDb: broadside - gain,
+    conductedPowerDbm: conducted,
+    eirpDbm: conducted === null ? null : conducted + gain,
+    eirpAtSteerDbm: conducted === null || atSteer === null ? null : conducted + atSteer,
     peakAzDeg: pk.az,
     peakElDeg: pk.el,
     hpbwAzDeg: az.hpbw,
