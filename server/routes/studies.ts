@@ -27,6 +27,7 @@ import {
   type StudyPatch,
 } from '../../shared/schemas/study.ts';
 import { studyCandidatesRouter } from './candidates.ts';
+import { studyCostModelRouter } from './cost-model.ts';
 import { studyTargetSheetRouter } from './target-sheets.ts';
 
 const id = validate({ params: IdParamsSchema });
@@ -67,6 +68,7 @@ export function studiesRouter(ctx: AppContext): Router {
     res.attachment(exportFileName(file.study.name)).json(file);
   });
   router.use('/:id/candidates', studyCandidatesRouter(ctx));
+  router.use('/:id/cost-model', studyCostModelRouter(ctx));
   router.use('/:id/target-sheet', studyTargetSheetRouter(ctx));
   return router;
 }
