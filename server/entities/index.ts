@@ -12,6 +12,7 @@ import { Decision } from './decision.ts';
 import { Sweep } from './sweep.ts';
 import { Calibration } from './calibration.ts';
 import { RangeUpload } from './range-upload.ts';
+import { StudyCostModel } from './cost-model.ts';
 
 export { Study, StudyShare, Team, User };
-export const entities = [Team, User, Study, StudyShare, ...accountEntities, Candidate, TargetSheetRow, Comment, ReviewRequest, Decision, Sweep, Calibration, RangeUpload];
+export const entities = [Team, User, Study, StudyShare, ...accountEntities, Candidate, TargetSheetRow, Comment, ReviewRequest, Decision, Sweep, Calibration, RangeUpload, StudyCostModel];

@@ -11,6 +11,8 @@ import type { Sweep } from '../entities/sweep.ts';
 import { safeText } from '../../shared/export/safe-cell.ts';
 import { buildQuery } from './sweep-query.ts';
 import { windowedDesignsCte } from './sweep-scan-window.ts';
+import { sweepCostBasis } from './sweep-pricing.ts';
+import type { SweepCostBasis } from '../../shared/cost/cost-model.ts';
 
 export interface Page<T> {
   total: number;
@@ -32,8 +34,11 @@ export type DesignRow = Record<string, unknown> & { designIndex: number; design:
 
 const select = (cols: ColumnDef[]) => cols.map((c) => `${c.column} AS "${c.field}"`).join(', ');
 
+/** Design rows, and which cost model priced them (the figures are re-priced whenever the study's model is saved). */
+export type DesignsPage = Page<DesignRow> & { cost: SweepCostBasis };
+
 /** Design rows; with a scan window (q.scanAz / q.scanEl) their figures cover only the points steered inside it. */
-export async function listDesigns(ctx: AppContext, sweep: Sweep, q: ResultsQuery): Promise<Page<DesignRow>> {
+export async function listDesigns(ctx: AppContext, sweep: Sweep, q: ResultsQuery): Promise<DesignsPage> {
   const { where, order, params } = buildQuery(sweep.id, q, DESIGN_COLUMNS, 'design_index');
   const windowed = q.scanAz || q.scanEl;
   const prefix = windowed ? windowedDesignsCte(q.scanAz, q.scanEl, params) : '';
@@ -43,7 +48,7 @@ export async function listDesigns(ctx: AppContext, sweep: Sweep, q: ResultsQuery
     `${prefix}SELECT ${select(DESIGN_COLUMNS)}, design FROM ${source} WHERE ${where} ORDER BY ${order} LIMIT ${q.limit} OFFSET ${q.offset}`,
     params,
   )) as DesignRow[];
-  return { total, rows };
+  return { total, rows, cost: await sweepCostBasis(ctx.db.manager, sweep.id) };
 }
 
 const CSV_BATCH = 2000;

@@ -1,7 +1,9 @@
 /** Turns evaluated points into rows of sweep_points and sweep_designs (snake_case keys, as the tables). */
 import type { Design } from '../../shared/schemas/design.ts';
 import type { PointResult } from '../../shared/sweep/chunk.ts';
+import type { CostModel } from '../../shared/cost/cost-model.ts';
 import { DESIGN_PARAM_COLUMNS, DESIGN_SUMMARY_COLUMNS, METRIC_COLUMNS, STEER_COLUMNS, paramValue } from '../../shared/sweep/columns.ts';
+import { designCostColumns } from '../../shared/sweep/design-cost.ts';
 import { summariseDesign } from '../../shared/sweep/design-summary.ts';
 
 type Row = Record<string, unknown>;
@@ -24,8 +26,32 @@ export function pointRow(sweepId: string, p: PointResult): Row {
   return row;
 }
 
-/** One row per design whose points are all in `points` (chunks hold whole designs). */
-export function designRows(sweepId: string, points: PointResult[]): Row[] {
+const numOrNull = (v: unknown) => (typeof v === 'number' && Number.isFinite(v) ? v : null);
+
+/** The design's cost columns under `model` (all null without one); conducted power is the same at every steer. */
+function costColumns(design: Record<string, unknown>, list: PointResult[], summary: Record<string, unknown>, model: CostModel | null, row: Row): void {
+  const metrics = list.find((p) => p.metrics !== null)?.metrics;
+  const conductedPowerDbm = numOrNull(metrics?.conductedPowerDbm);
+  const cost = designCostColumns(
+    {
+      nx: numOrNull(design.nx),
+      ny: numOrNull(design.ny),
+      channels: numOrNull(summary.channels),
+      apertureXMm: numOrNull(summary.apertureXMm),
+      apertureYMm: numOrNull(summary.apertureYMm),
+      conductedPowerDbm,
+    },
+    model,
+  );
+  row.conducted_power_dbm = conductedPowerDbm;
+  row.beamformer_chips = cost.beamformerChips;
+  row.cost_usd = finite(cost.costUsd);
+  row.dc_power_w = finite(cost.dcPowerW);
+  row.heat_w_per_cm2 = finite(cost.heatWPerCm2);
+}
+
+/** One row per design whose points are all in `points` (chunks hold whole designs), priced under `costModel`. */
+export function designRows(sweepId: string, points: PointResult[], costModel: CostModel | null = null): Row[] {
   const byDesign = new Map<number, PointResult[]>();
   for (const p of points) {
     const list = byDesign.get(p.designIndex);
@@ -39,6 +65,7 @@ export function designRows(sweepId: string, points: PointResult[]): Row[] {
     params(first.design, row);
     const summary = summariseDesign(list);
     for (const c of DESIGN_SUMMARY_COLUMNS) row[c.column] = finite(summary[c.field] ?? null);
+    costColumns(design, list, summary, costModel, row);
     return row;
   });
 }

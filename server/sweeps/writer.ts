@@ -5,6 +5,7 @@
  */
 import type { DataSource } from 'typeorm';
 import type { PointResult } from '../../shared/sweep/chunk.ts';
+import { currentCostModel } from '../services/sweep-pricing.ts';
 import { designRows, pointRow } from './rows.ts';
 
 /** Rows per INSERT: one JSON parameter each, expanded by PostgreSQL (no parameter-count limit). */
@@ -21,8 +22,10 @@ export async function writeChunk(
 ): Promise<WriteOutcome> {
   return db.transaction(async (m) => {
     // Lock the sweep row: a cancel and the counters serialise against it.
-    const [sweep] = (await m.query(`SELECT status FROM sweeps WHERE id = $1 FOR UPDATE`, [sweepId])) as { status: string }[];
+    const [sweep] = (await m.query(`SELECT status, study_id FROM sweeps WHERE id = $1 FOR UPDATE`, [sweepId])) as { status: string; study_id: string }[];
     if (!sweep || (sweep.status !== 'queued' && sweep.status !== 'running')) return 'skipped';
+    // Read after the lock: a cost-model save re-prices under the same lock (services/sweep-pricing.ts).
+    const cost = await currentCostModel(m, sweep.study_id);
     let inserted = 0;
     let failed = 0;
     for (let i = 0; i < points.length; i += BATCH_ROWS) {
@@ -35,7 +38,7 @@ export async function writeChunk(
       inserted += res.length;
       failed += res.filter((r) => r.failed).length;
     }
-    const designs = designRows(sweepId, points);
+    const designs = designRows(sweepId, points, cost?.model ?? null);
     for (let i = 0; i < designs.length; i += BATCH_ROWS) {
       await m.query(
         `INSERT INTO sweep_designs SELECT * FROM jsonb_populate_recordset(NULL::sweep_designs, $1::jsonb) ON CONFLICT DO NOTHING`,
@@ -52,9 +55,9 @@ export async function writeChunk(
          status = CASE WHEN points_done + $2 >= points_total THEN 'done' ELSE 'running' END,
          started_at = COALESCE(started_at, now()),
          finished_at = CASE WHEN points_done + $2 >= points_total THEN now() ELSE finished_at END,
-         updated_at = now()
+         updated_at = now(), cost_model_version = $4
        WHERE id = $1`,
-      [sweepId, inserted, failed],
+      [sweepId, inserted, failed, cost?.version ?? null],
     );
     return 'written';
   });

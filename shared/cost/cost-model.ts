@@ -48,3 +48,26 @@ export const CostModelSchema = z
 
 export type CostModel = z.output<typeof CostModelSchema>;
 export type CostModelField = keyof CostModel;
+
+/** GET/PUT /api/studies/:id/cost-model answer. */
+export interface CostModelView {
+  studyId: string;
+  /** null while the study has no model: cost columns stay empty until one is saved. */
+  model: CostModel | null;
+  /** Counts saves; sweep figures name the version they were priced with. */
+  version: number | null;
+  updatedAt: string | null;
+  /** Sweeps re-priced by this save (PUT only). */
+  repricedSweeps?: number;
+}
+
+/** Which cost model a sweep's figures were priced with (beside GET /api/sweeps/:id/designs rows). */
+export interface SweepCostBasis {
+  /** The model version the stored figures used; null: priced without a model (cost columns empty). */
+  version: number | null;
+  /** The study's model version now; null: the study has no model. */
+  currentVersion: number | null;
+  currency: string | null;
+  /** True when the figures are on the study's current model. */
+  current: boolean;
+}

@@ -1,5 +1,5 @@
 /** Cost and power of a design under a study's cost model: pure, one rule per file. */
-export { CostModelSchema, type CostModel, type CostModelField } from './cost-model.ts';
+export { CostModelSchema, type CostModel, type CostModelField, type CostModelView, type SweepCostBasis } from './cost-model.ts';
 export { beamformerChips } from './beamformer-chips.ts';
 export { boardAreaMm2 } from './board-area-mm2.ts';
 export { paDcPowerW, dbmToW } from './pa-dc-power-w.ts';

@@ -89,7 +89,25 @@ export const DESIGN_SUMMARY_COLUMNS: ColumnDef[] = [
   col('maxPointingErrorDeg', 'max_pointing_error_deg', 'float'),
 ];
 
-export const DESIGN_COLUMNS: ColumnDef[] = [col('designIndex', 'design_index', 'int'), ...DESIGN_PARAM_COLUMNS, ...DESIGN_SUMMARY_COLUMNS];
+/**
+ * Cost and power of a design (shared/sweep/design-cost.ts): the conducted power it is priced from, then the figures
+ * under the study's current cost model (re-priced whenever the model is saved; sweeps.cost_model_version says which).
+ * They do not depend on steering, so a scan window leaves them as stored.
+ */
+export const DESIGN_COST_COLUMNS: ColumnDef[] = [
+  col('conductedPowerDbm', 'conducted_power_dbm', 'float'),
+  col('beamformerChips', 'beamformer_chips', 'int'),
+  col('costUsd', 'cost_usd', 'float'),
+  col('dcPowerW', 'dc_power_w', 'float'),
+  col('heatWPerCm2', 'heat_w_per_cm2', 'float'),
+];
+
+export const DESIGN_COLUMNS: ColumnDef[] = [
+  col('designIndex', 'design_index', 'int'),
+  ...DESIGN_PARAM_COLUMNS,
+  ...DESIGN_SUMMARY_COLUMNS,
+  ...DESIGN_COST_COLUMNS,
+];
 
 type Labelled = { kind: string } & Record<string, unknown>;
 

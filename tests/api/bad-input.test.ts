@@ -73,6 +73,12 @@ const BODIES: Record<string, BodySpec> = {
   'PATCH /api/studies/:id': { body: () => ({ name: 'Renamed', description: 'd', archived: false }), allowEmpty: ['description'] },
   'POST /api/studies/:id/candidates': { body: () => ({ name: 'Spoilt candidate', design: { ...DESIGN }, notes: 'n' }), allowEmpty: ['notes'] },
   'PATCH /api/candidates/:id': { body: () => ({ name: 'Renamed', design: { ...DESIGN }, notes: 'n', position: 1 }), allowEmpty: ['notes'] },
+  'PUT /api/studies/:id/cost-model': {
+    body: () => ({
+      currency: 'EUR', channelsPerChip: 8, chipPrice: 20, elementPrice: 0.5, boardPricePerMm2: 0.001, boardMarginMm: 1,
+      modulePrice: 4, paEfficiency: 0.15, channelOverheadW: 0.04, chipOverheadW: 0.2, txDutyCycle: 0.5,
+    }),
+  },
   'PUT /api/studies/:id/target-sheet': {
     body: () => ({
       preset: null,

@@ -208,6 +208,21 @@ export const matrix: MatrixRow[] = [
     admin: 201,
     otherTeam: 404,
   },
+  { method: 'GET', path: '/api/studies/:id/cost-model', params: { id: 'studyId' }, ...member(200), otherTeam: 404 },
+  {
+    method: 'PUT',
+    path: '/api/studies/:id/cost-model',
+    params: { id: 'studyId' },
+    body: {
+      currency: 'EUR', channelsPerChip: 8, chipPrice: 20, elementPrice: 0.5, boardPricePerMm2: 0.001, boardMarginMm: 1,
+      modulePrice: 4, paEfficiency: 0.15, channelOverheadW: 0.04, chipOverheadW: 0.2, txDutyCycle: 0.5,
+    },
+    anonymous: 401,
+    reviewer: 403,
+    engineer: 200,
+    admin: 200,
+    otherTeam: 404,
+  },
   { method: 'GET', path: '/api/studies/:id/target-sheet', params: { id: 'studyId' }, ...member(200), otherTeam: 404 },
   {
     method: 'PUT',
