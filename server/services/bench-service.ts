@@ -6,8 +6,8 @@ import type { AuthUser } from '../auth/types.ts';
 import type { AppContext } from '../context.ts';
 import { Calibration } from '../entities/calibration.ts';
 import { Candidate } from '../entities/candidate.ts';
-import { ApiError, NotFound, invalidInput } from '../errors.ts';
-import { findStudyFor } from './study-access.ts';
+import { ApiError, invalidInput } from '../errors.ts';
+import { candidateFor } from './candidate-service.ts';
 import { runMonteCarlo } from '../bench/run-monte-carlo.ts';
 import type { CalibrationChoice, CodesCsvQuery, CodesRequest, ManualCodesRequest, SquintRequest } from '../../shared/bench/api-schemas.ts';
 import { BenchInputError } from '../../shared/bench/bench-input-error.ts';
@@ -27,16 +27,6 @@ import { parseCalibrationCsv } from '../../shared/bench/parse-calibration-csv.ts
 import { BANDS } from '../../shared/targets/bands.ts';
 import { channelCount, DesignSchema, type Design } from '../../shared/schemas/design.ts';
 import { formatIssue, issueFields } from '../../shared/schemas/format-issue.ts';
-
-/** The candidate if the user may reach its study with `need`; a study they cannot see answers 404 candidate. */
-export async function benchCandidate(ctx: AppContext, user: AuthUser, id: string, need: 'read' | 'edit'): Promise<Candidate> {
-  const candidate = await ctx.db.getRepository(Candidate).findOneBy({ id });
-  if (!candidate) throw NotFound('candidate');
-  await findStudyFor(ctx, user, candidate.studyId, need).catch((err: unknown) => {
-    throw err instanceof ApiError && err.status === 404 ? NotFound('candidate') : err;
-  });
-  return candidate;
-}
 
 /** The stored design with today's defaults filled in. */
 export function designOf(candidate: Candidate): Design {
@@ -85,14 +75,14 @@ function beamsOf(input: string | Beam[]): Beam[] {
 
 /** The bench-codes table for a beam list (POST body). */
 export async function codesFor(ctx: AppContext, user: AuthUser, id: string, req: CodesRequest): Promise<CodesTable> {
-  const candidate = await benchCandidate(ctx, user, id, 'read');
+  const candidate = await candidateFor(ctx, user, id, 'read');
   const calibration = await offsetsFor(ctx, id, req.calibration);
   return benchCall(() => codesTable(designOf(candidate), beamsOf(req.beams), { calibration, pointingThresholdDeg: req.pointingThresholdDeg }));
 }
 
 /** The same table as CSV, with a file name for the download. */
 export async function codesCsvFor(ctx: AppContext, user: AuthUser, id: string, q: CodesCsvQuery): Promise<{ csv: string; filename: string }> {
-  const candidate = await benchCandidate(ctx, user, id, 'read');
+  const candidate = await candidateFor(ctx, user, id, 'read');
   const calibration = await offsetsFor(ctx, id, q.calibration);
   const table = benchCall(() => codesTable(designOf(candidate), beamsOf(q.beams), { calibration, pointingThresholdDeg: q.threshold ?? null }));
   const safe = candidate.name.replace(/[^A-Za-z0-9._-]+/g, '-').replace(/^-+|-+$/g, '') || 'candidate';
@@ -107,7 +97,7 @@ export interface CalibrationView {
 }
 
 export async function getCalibration(ctx: AppContext, user: AuthUser, id: string): Promise<CalibrationView> {
-  await benchCandidate(ctx, user, id, 'read');
+  await candidateFor(ctx, user, id, 'read');
   const row = await ctx.db.getRepository(Calibration).findOneBy({ candidateId: id });
   return { candidateId: id, offsets: row?.offsets ?? [], sourceFilename: row?.sourceFilename ?? null, updatedAt: row?.updatedAt ?? null };
 }
@@ -124,7 +114,7 @@ export function calibrationFromFile(bytes: Buffer): Offsets {
 
 /** Replaces the candidate's calibration (checked against its channel count). */
 export async function putCalibration(ctx: AppContext, user: AuthUser, id: string, offsets: Offsets, sourceFilename: string | null): Promise<CalibrationView> {
-  const candidate = await benchCandidate(ctx, user, id, 'edit');
+  const candidate = await candidateFor(ctx, user, id, 'edit');
   const design = designOf(candidate);
   benchCall(() => offsetArrays(offsets, channelCount(design.grouping, design.nx, design.ny), 'offsets'));
   const repo = ctx.db.getRepository(Calibration);
@@ -134,13 +124,13 @@ export async function putCalibration(ctx: AppContext, user: AuthUser, id: string
 
 /** Codes typed for one beam: the pattern and where the beam really points. */
 export async function manualCodes(ctx: AppContext, user: AuthUser, id: string, req: ManualCodesRequest): Promise<ManualCodesResult> {
-  const candidate = await benchCandidate(ctx, user, id, 'read');
+  const candidate = await candidateFor(ctx, user, id, 'read');
   const calibration = await offsetsFor(ctx, id, req.calibration);
   return benchCall(() => manualCodesPattern(designOf(candidate), req.codes, calibration));
 }
 
 export async function squintFor(ctx: AppContext, user: AuthUser, id: string, req: SquintRequest): Promise<SquintResult & { band: { id: string | null; lowGHz: number; highGHz: number; source: string | null } }> {
-  const candidate = await benchCandidate(ctx, user, id, 'read');
+  const candidate = await candidateFor(ctx, user, id, 'read');
   const preset = typeof req.band === 'string' ? BANDS.find((b) => b.id === req.band) : null;
   if (typeof req.band === 'string' && !preset) throw invalidInput([{ field: 'band', message: `must be one of ${BANDS.map((b) => b.id).join(', ')} or {lowGHz, highGHz}` }]);
   const band = preset ? { id: preset.id, lowGHz: preset.lowGHz, highGHz: preset.highGHz, source: preset.source } : { id: null, ...(req.band as { lowGHz: number; highGHz: number }), source: null };
@@ -157,7 +147,7 @@ export async function squintFor(ctx: AppContext, user: AuthUser, id: string, req
 
 /** Monte Carlo of channel errors; large runs go to the worker pool. */
 export async function monteCarloFor(ctx: AppContext, user: AuthUser, id: string, options: MonteCarloOptions): Promise<MonteCarloSummary> {
-  const candidate = await benchCandidate(ctx, user, id, 'read');
+  const candidate = await candidateFor(ctx, user, id, 'read');
   const design = designOf(candidate);
   try {
     return await runMonteCarlo(design, options, { inlineTrials: ctx.config.MONTE_CARLO_INLINE_TRIALS, threads: ctx.config.SWEEP_THREADS });

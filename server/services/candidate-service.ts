@@ -2,11 +2,10 @@
 import type { AuthUser } from '../auth/types.ts';
 import type { AppContext } from '../context.ts';
 import { Candidate } from '../entities/candidate.ts';
-import { NotFound } from '../errors.ts';
 import type { CandidateCreate, CandidatePatch } from '../../shared/schemas/study.ts';
 import { audit } from './audit-service.ts';
 import { touchStudy } from './study-service.ts';
-import { findStudyFor } from './study-access.ts';
+import { findInStudy, findStudyFor, type StudyNeed } from './study-access.ts';
 
 export async function listCandidates(ctx: AppContext, user: AuthUser, studyId: string): Promise<Candidate[]> {
   await findStudyFor(ctx, user, studyId, 'read');
@@ -29,14 +28,9 @@ export async function createCandidate(ctx: AppContext, user: AuthUser, studyId: 
 }
 
 /** The candidate, if the user may reach its study with `need`; another team's id is a 404. */
-async function candidateFor(ctx: AppContext, user: AuthUser, id: string, need: 'read' | 'edit'): Promise<Candidate> {
-  const candidate = await ctx.db.getRepository(Candidate).findOneBy({ id });
-  if (!candidate) throw NotFound('candidate');
-  await findStudyFor(ctx, user, candidate.studyId, need).catch((err: unknown) => {
-    // A study the user cannot see must not reveal that its candidate exists.
-    throw (err as { status?: number }).status === 404 ? NotFound('candidate') : err;
-  });
-  return candidate;
+export async function candidateFor(ctx: AppContext, user: AuthUser, id: string, need: StudyNeed): Promise<Candidate> {
+  const { row } = await findInStudy(ctx, user, 'candidate', need, () => ctx.db.getRepository(Candidate).findOneBy({ id }));
+  return row;
 }
 
 export async function getCandidate(ctx: AppContext, user: AuthUser, id: string): Promise<Candidate> {

@@ -10,9 +10,8 @@ import { Comment, type CommentTargetKind } from '../entities/comment.ts';
 import { StudyShare } from '../entities/study-share.ts';
 import type { Study } from '../entities/study.ts';
 import { User } from '../entities/user.ts';
-import { NotFound } from '../errors.ts';
 import type { CommentCreate } from '../../shared/schemas/review.ts';
-import { canRead, findStudyFor } from './study-access.ts';
+import { canRead, findInStudy, findStudyFor } from './study-access.ts';
 
 export interface CommentView {
   id: string;
@@ -86,11 +85,7 @@ export async function listComments(ctx: AppContext, user: AuthUser, studyId: str
 }
 
 export async function getComment(ctx: AppContext, user: AuthUser, id: string): Promise<CommentView> {
-  const c = await ctx.db.getRepository(Comment).findOneBy({ id });
-  if (!c) throw NotFound('comment');
-  await findStudyFor(ctx, user, c.studyId, 'read').catch((err: unknown) => {
-    throw (err as { status?: number }).status === 404 ? NotFound('comment') : err;
-  });
+  const { row: c } = await findInStudy(ctx, user, 'comment', 'read', () => ctx.db.getRepository(Comment).findOneBy({ id }));
   return view(c, await namesFor(ctx, user.teamId));
 }
 

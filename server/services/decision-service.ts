@@ -18,7 +18,7 @@ import type { Design } from '../../shared/schemas/design.ts';
 import type { DecisionCreate, DecisionPatch } from '../../shared/schemas/review.ts';
 import type { TargetSheet } from '../../shared/targets/sheet.ts';
 import { audit } from './audit-service.ts';
-import { findStudyFor } from './study-access.ts';
+import { findInStudy, findStudyFor } from './study-access.ts';
 
 export type DecisionStatus = 'draft' | 'signed' | 'superseded';
 
@@ -172,12 +172,8 @@ export async function createDecision(ctx: AppContext, user: AuthUser, studyId: s
 
 /** The decision if its study is readable; another team's id is a 404. */
 async function decisionFor(ctx: AppContext, user: AuthUser, id: string): Promise<Decision> {
-  const decision = await ctx.db.getRepository(Decision).findOneBy({ id });
-  if (!decision) throw NotFound('decision');
-  await findStudyFor(ctx, user, decision.studyId, 'read').catch((err: unknown) => {
-    throw (err as { status?: number }).status === 404 ? NotFound('decision') : err;
-  });
-  return decision;
+  const { row } = await findInStudy(ctx, user, 'decision', 'read', () => ctx.db.getRepository(Decision).findOneBy({ id }));
+  return row;
 }
 
 export async function getDecision(ctx: AppContext, user: AuthUser, id: string): Promise<DecisionView> {

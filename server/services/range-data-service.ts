@@ -6,10 +6,11 @@ import type { AuthUser } from '../auth/types.ts';
 import type { AppContext } from '../context.ts';
 import { Calibration } from '../entities/calibration.ts';
 import { RangeUpload } from '../entities/range-upload.ts';
-import { ApiError, NotFound } from '../errors.ts';
+import { ApiError } from '../errors.ts';
 import { audit } from './audit-service.ts';
-import { benchCall, benchCandidate, designOf } from './bench-service.ts';
-import { findStudyFor } from './study-access.ts';
+import { benchCall, designOf } from './bench-service.ts';
+import { candidateFor } from './candidate-service.ts';
+import { findInStudy, findStudyFor } from './study-access.ts';
 import type { RangeUploadFields } from '../../shared/bench/api-schemas.ts';
 import { analyseMeasurement } from '../../shared/bench/analyse-measurement.ts';
 import { beamCodes } from '../../shared/bench/beam-codes.ts';
@@ -52,7 +53,7 @@ export type RangeUploadSummary = ReturnType<typeof summary>;
 
 /** Parses, analyses and stores one upload; 400 with the line and reason for a malformed file. */
 export async function createRangeUpload(ctx: AppContext, user: AuthUser, candidateId: string, fields: RangeUploadFields, file: UploadedFile | undefined) {
-  const candidate = await benchCandidate(ctx, user, candidateId, 'edit');
+  const candidate = await candidateFor(ctx, user, candidateId, 'edit');
   if (!file) throw new ApiError(400, 'invalid_input', 'file: is required (a CSV of angle and power)', [{ field: 'file', message: 'is required (a CSV of angle and power)' }]);
   const design = designOf(candidate);
   let parsed;
@@ -109,12 +110,8 @@ export async function listRangeUploads(ctx: AppContext, user: AuthUser, studyId:
 async function uploadFor(ctx: AppContext, user: AuthUser, id: string, need: 'read' | 'edit', withRaw = false): Promise<RangeUpload> {
   const qb = ctx.db.getRepository(RangeUpload).createQueryBuilder('u').where('u.id = :id', { id });
   if (withRaw) qb.addSelect('u.raw');
-  const upload = await qb.getOne();
-  if (!upload) throw NotFound('range data');
-  await findStudyFor(ctx, user, upload.studyId, need).catch((err: unknown) => {
-    throw err instanceof ApiError && err.status === 404 ? NotFound('range data') : err;
-  });
-  return upload;
+  const { row } = await findInStudy(ctx, user, 'range data', need, () => qb.getOne());
+  return row;
 }
 
 /** One upload: its analysis, the measured cuts and the model cuts. */

@@ -11,7 +11,7 @@ import { User } from '../entities/user.ts';
 import { Forbidden, NotFound } from '../errors.ts';
 import type { ReviewAnswer, ReviewRequestCreate, ReviewRequestView, StudyReview, StudyReviewState } from '../../shared/schemas/review.ts';
 import { audit } from './audit-service.ts';
-import { findStudyFor } from './study-access.ts';
+import { findInStudy, findStudyFor } from './study-access.ts';
 
 type RequestFacts = Pick<ReviewRequest, 'reviewerId' | 'state' | 'createdAt' | 'answeredAt'>;
 
@@ -127,11 +127,7 @@ async function mailReviewer(ctx: AppContext, from: AuthUser, study: Study, r: Re
 
 /** The asked reviewer answers; anyone else gets 403, another team's id 404. The requester is mailed. */
 export async function answerReviewRequest(ctx: AppContext, user: AuthUser, id: string, answer: ReviewAnswer, baseUrl: string): Promise<ReviewRequestView> {
-  const request = await ctx.db.getRepository(ReviewRequest).findOneBy({ id });
-  if (!request) throw NotFound('review request');
-  const study = await findStudyFor(ctx, user, request.studyId, 'read').catch((err: unknown) => {
-    throw (err as { status?: number }).status === 404 ? NotFound('review request') : err;
-  });
+  const { row: request, study } = await findInStudy(ctx, user, 'review request', 'read', () => ctx.db.getRepository(ReviewRequest).findOneBy({ id }));
   if (request.reviewerId !== user.id) throw Forbidden('only the reviewer who was asked may answer this request');
   request.state = answer.state;
   request.note = answer.note;

@@ -7,7 +7,7 @@ import type { AuthUser } from '../auth/types.ts';
 import type { AppContext } from '../context.ts';
 import { Study } from '../entities/study.ts';
 import { StudyShare, type ShareAccess } from '../entities/study-share.ts';
-import { Forbidden, NotFound } from '../errors.ts';
+import { ApiError, Forbidden, NotFound } from '../errors.ts';
 
 export type StudyNeed = 'read' | 'edit';
 
@@ -53,4 +53,24 @@ export async function findStudyFor(ctx: AppContext, user: AuthUser, studyId: str
     throw Forbidden(user.role === 'reviewer' ? 'reviewers can read studies but not change them' : 'you may read this study but not change it');
   }
   return study;
+}
+
+/**
+ * A study-scoped row (anything with a studyId) if the user may `need` its study: `load` fetches it, then the study
+ * is checked. A missing row and a row of a study the user cannot see both answer NotFound(label), so ids never
+ * reveal what exists elsewhere; Forbidden (read-only access to an edit) passes through.
+ */
+export async function findInStudy<T extends { studyId: string }>(
+  ctx: AppContext,
+  user: AuthUser,
+  label: string,
+  need: StudyNeed,
+  load: () => Promise<T | null>,
+): Promise<{ row: T; study: Study }> {
+  const row = await load();
+  if (!row) throw NotFound(label);
+  const study = await findStudyFor(ctx, user, row.studyId, need).catch((err: unknown) => {
+    throw err instanceof ApiError && err.status === 404 ? NotFound(label) : err;
+  });
+  return { row, study };
 }

@@ -9,8 +9,8 @@ import type { SweepRequest } from '../../shared/sweep/request.ts';
 import type { AuthUser } from '../auth/types.ts';
 import type { AppContext } from '../context.ts';
 import { FINISHED_STATUSES, Sweep, type SweepStatus } from '../entities/sweep.ts';
-import { ApiError, Conflict, NotFound, invalidInput } from '../errors.ts';
-import { findStudyFor, type StudyNeed } from './study-access.ts';
+import { Conflict, invalidInput } from '../errors.ts';
+import { findInStudy, findStudyFor, type StudyNeed } from './study-access.ts';
 
 export interface SweepProgress {
   id: string;
@@ -105,16 +105,8 @@ export async function listSweeps(ctx: AppContext, user: AuthUser, studyId: strin
 
 /** The sweep if the user may `need` its study; another team's sweep is "not found". */
 export async function findSweepFor(ctx: AppContext, user: AuthUser, sweepId: string, need: StudyNeed): Promise<Sweep> {
-  const sweep = await ctx.db.getRepository(Sweep).findOneBy({ id: sweepId });
-  if (!sweep) throw NotFound('sweep');
-  try {
-    await findStudyFor(ctx, user, sweep.studyId, need);
-  } catch (err) {
-    // Hide which sweeps exist elsewhere: a study you cannot see makes its sweep unknown too.
-    if (err instanceof ApiError && err.status === 404) throw NotFound('sweep');
-    throw err;
-  }
-  return sweep;
+  const { row } = await findInStudy(ctx, user, 'sweep', need, () => ctx.db.getRepository(Sweep).findOneBy({ id: sweepId }));
+  return row;
 }
 
 export async function getSweep(ctx: AppContext, user: AuthUser, sweepId: string): Promise<SweepProgress> {
