@@ -8,7 +8,7 @@ import type { AppContext } from '../context.ts';
 import { ReviewRequest } from '../entities/review-request.ts';
 import type { Study } from '../entities/study.ts';
 import { User } from '../entities/user.ts';
-import { Forbidden, NotFound } from '../errors.ts';
+import { Forbidden } from '../errors.ts';
 import type { ReviewAnswer, ReviewRequestCreate, ReviewRequestView, StudyReview, StudyReviewState } from '../../shared/schemas/review.ts';
 import { audit } from './audit-service.ts';
 import { findInStudy, findStudyFor } from './study-access.ts';
