@@ -24,7 +24,8 @@ import { sweepLines } from '../server/cli/commands/sweep.ts';
 import { createSweepPool } from '../server/sweeps/pool.ts';
 
 const REFERENCE = fileURLToPath(new URL('./reference/numpy_sweep.py', import.meta.url));
-const CLI = fileURLToPath(new URL('../server/cli/index.ts', import.meta.url));
+// The launcher `npm run cli` uses: the bundled command line (built on first use, then cached).
+const CLI = fileURLToPath(new URL('../server/cli/run.mjs', import.meta.url));
 const SAMPLE_EVERY = 41;
 
 const out = (s: string) => process.stdout.write(`${s}\n`);
@@ -72,10 +73,10 @@ async function inProcess(threads: number): Promise<Run> {
   }
 }
 
-/** The whole CLI as a user runs it: node start, tsx, pool start, evaluation and stdout. */
+/** The whole CLI as a user runs it: node start, the bundled command line, pool start, evaluation and stdout. */
 function cliProcess(file: string, threads: number): { text: string; seconds: number } {
   const t0 = performance.now();
-  const r = spawnSync(process.execPath, ['--import', 'tsx', CLI, 'sweep', '--grid', file, '--workers', String(threads)], {
+  const r = spawnSync(process.execPath, [CLI, 'sweep', '--grid', file, '--workers', String(threads)], {
     encoding: 'utf8',
     maxBuffer: 64 * 1024 * 1024,
   });
