@@ -80,6 +80,13 @@ function checkOne(key: LimitKey, f: DesignFigures, sheet: TargetSheet): LimitChe
         : { pass: f.gratingLobeInScan === null ? null : !f.gratingLobeInScan, value: f.gratingLobeInScan, limit: true };
     case 'maxPointingErrorDeg':
       return sheet.maxPointingErrorDeg == null ? null : atMost(f.maxPointingErrorDeg, sheet.maxPointingErrorDeg);
+    // Cost figures exist only where a cost model priced the design (otherwise not applicable).
+    case 'maxCostUsd':
+      return sheet.maxCostUsd == null ? null : atMost(f.costUsd ?? null, sheet.maxCostUsd);
+    case 'maxDcPowerW':
+      return sheet.maxDcPowerW == null ? null : atMost(f.dcPowerW ?? null, sheet.maxDcPowerW);
+    case 'maxHeatWPerCm2':
+      return sheet.maxHeatWPerCm2 == null ? null : atMost(f.heatWPerCm2 ?? null, sheet.maxHeatWPerCm2);
   }
 }
 

@@ -28,6 +28,12 @@ export interface DesignFigures {
   scanAzMaxDeg: number | null;
   scanElMinDeg: number | null;
   scanElMaxDeg: number | null;
+  /** Module cost under the study's cost model (its currency); absent or null without a model. */
+  costUsd?: number | null;
+  /** Average DC draw of the module (W); null without a model or a channel power. */
+  dcPowerW?: number | null;
+  /** Dissipated W per cm² of the module outline; null like dcPowerW. */
+  heatWPerCm2?: number | null;
 }
 
 /** The fields of a design and of the engine's metrics that the figures read (the engine's types satisfy these). */

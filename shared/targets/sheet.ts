@@ -77,6 +77,25 @@ export const TargetSheetSchema = z
         .max(90, 'must be a number from 0 to 90 (degrees)')
         .nullable()
         .optional(),
+      // Cost and power limits, judged on the figures of the study's cost model (shared/cost).
+      maxCostUsd: z
+        .number({ error: 'must be a number from 0 to 1e9 (in the cost model\'s currency)' })
+        .min(0, 'must be a number from 0 to 1e9 (in the cost model\'s currency)')
+        .max(1e9, 'must be a number from 0 to 1e9 (in the cost model\'s currency)')
+        .nullable()
+        .optional(),
+      maxDcPowerW: z
+        .number({ error: 'must be a number from 0 to 1e6 (W)' })
+        .min(0, 'must be a number from 0 to 1e6 (W)')
+        .max(1e6, 'must be a number from 0 to 1e6 (W)')
+        .nullable()
+        .optional(),
+      maxHeatWPerCm2: z
+        .number({ error: 'must be a number from 0 to 1000 (W/cm²)' })
+        .min(0, 'must be a number from 0 to 1000 (W/cm²)')
+        .max(1000, 'must be a number from 0 to 1000 (W/cm²)')
+        .nullable()
+        .optional(),
     },
     { error: 'must be a target sheet object' },
   )
@@ -101,6 +120,9 @@ export const LIMIT_KEYS = [
   'maxSllDb',
   'noGratingLobeInScan',
   'maxPointingErrorDeg',
+  'maxCostUsd',
+  'maxDcPowerW',
+  'maxHeatWPerCm2',
 ] as const;
 export type LimitKey = (typeof LIMIT_KEYS)[number];
 
@@ -119,4 +141,7 @@ export const LIMIT_LABELS: Record<LimitKey, string> = {
   maxSllDb: 'Max side-lobe level (dB)',
   noGratingLobeInScan: 'No grating lobe in scan',
   maxPointingErrorDeg: 'Max pointing error (°)',
+  maxCostUsd: 'Max cost per module',
+  maxDcPowerW: 'Max DC power (W)',
+  maxHeatWPerCm2: 'Max heat density (W/cm²)',
 };
