@@ -41,6 +41,9 @@ export interface TradeDesign {
   directivityMaxDbi: number | null;
   points: number;
   failedPoints: number;
+  /** Total conducted power of the design (dBm), and its chips under the study's cost model; absent = unknown. */
+  conductedPowerDbm?: number | null;
+  beamformerChips?: number | null;
 }
 
 /** Short words for a taper, as the table and the chart legends print it. */
@@ -130,6 +133,9 @@ export function fromDesignRow(row: DesignRowJson, span: SteerSpan | null): Trade
     scanAzMaxDeg: span?.azMaxDeg ?? null,
     scanElMinDeg: span?.elMinDeg ?? null,
     scanElMaxDeg: span?.elMaxDeg ?? null,
+    costUsd: num(row.costUsd),
+    dcPowerW: num(row.dcPowerW),
+    heatWPerCm2: num(row.heatWPerCm2),
   };
   return {
     designIndex: row.designIndex,
@@ -141,5 +147,7 @@ export function fromDesignRow(row: DesignRowJson, span: SteerSpan | null): Trade
     directivityMaxDbi: num(row.directivityMaxDbi),
     points: num(row.angles) ?? 0,
     failedPoints: num(row.pointsFailed) ?? 0,
+    conductedPowerDbm: num(row.conductedPowerDbm),
+    beamformerChips: num(row.beamformerChips),
   };
 }

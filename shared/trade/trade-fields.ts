@@ -68,6 +68,12 @@ export const TRADE_FIELDS: readonly TradeField[] = [
   { key: 'gratingLobeOnsetElDeg', label: 'Grating-lobe onset el', unit: '°', group: 'Metrics', type: 'number', digits: 1, better: 'max', get: (r) => r.gratingLobeOnsetElDeg },
   { key: 'gratingLobeInScan', label: 'Grating lobe in scan', unit: '', group: 'Metrics', type: 'boolean', limit: 'noGratingLobeInScan', serverKey: 'gratingLobeVisibleAny', get: (r) => f(r).gratingLobeInScan },
   { key: 'maxPointingErrorDeg', label: 'Worst pointing error', unit: '°', group: 'Metrics', type: 'number', digits: 2, limit: 'maxPointingErrorDeg', better: 'min', get: (r) => f(r).maxPointingErrorDeg },
+  // Cost and power under the study's cost model (shared/cost); the amount is in the model's currency.
+  { key: 'conductedPowerDbm', label: 'Conducted power', unit: 'dBm', group: 'Metrics', type: 'number', digits: 1, get: (r) => r.conductedPowerDbm ?? null },
+  { key: 'beamformerChips', label: 'Beamformer chips', unit: '', group: 'Metrics', type: 'number', digits: 0, better: 'min', get: (r) => r.beamformerChips ?? null },
+  { key: 'costUsd', label: 'Module cost', unit: 'model currency', group: 'Metrics', type: 'number', digits: 2, limit: 'maxCostUsd', better: 'min', get: (r) => f(r).costUsd ?? null },
+  { key: 'dcPowerW', label: 'DC power', unit: 'W', group: 'Metrics', type: 'number', digits: 2, limit: 'maxDcPowerW', better: 'min', get: (r) => f(r).dcPowerW ?? null },
+  { key: 'heatWPerCm2', label: 'Heat density', unit: 'W/cm²', group: 'Metrics', type: 'number', digits: 3, limit: 'maxHeatWPerCm2', better: 'min', get: (r) => f(r).heatWPerCm2 ?? null },
 ];
 
 const BY_KEY = new Map(TRADE_FIELDS.map((x) => [x.key, x]));
