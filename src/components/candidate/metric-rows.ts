@@ -25,6 +25,7 @@ export function metricRows(m: Metrics): MetricRow[] {
     { key: 'channels', label: 'Channels', value: String(m.channels) },
     { key: 'aperture', label: 'Aperture (x × y)', value: `${f(m.apertureXMm, 2)} × ${f(m.apertureYMm, 2)} mm` },
     { key: 'eirpDbm', label: 'EIRP', value: f(m.eirpDbm, 1, ' dBm') },
-    { key: 'codes', label: 'Phase codes', value: m.codes ? m.codes.join(', ') : 'continuous phase' },
+    // The codes themselves have their own table (ChannelCodesTable): 64 of them do not fit a cell.
+    { key: 'phase', label: 'Phase control', value: m.codes ? `${m.codes.length} codes (listed below)` : 'continuous phase' },
   ];
 }
