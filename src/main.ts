@@ -1,6 +1,5 @@
 import { createApp } from 'vue';
 import { createPinia } from 'pinia';
-import Antd from 'ant-design-vue';
 import '@fontsource/work-sans/400.css';
 import '@fontsource/work-sans/500.css';
 import '@fontsource/work-sans/600.css';
@@ -9,4 +8,4 @@ import './styles/base.css';
 import App from './App.vue';
 import { router } from './router';
 
-createApp(App).use(createPinia()).use(router).use(Antd).mount('#app');
+createApp(App).use(createPinia()).use(router).mount('#app');

@@ -1,6 +1,4 @@
 import { createRouter, createWebHistory, type RouteRecordRaw } from 'vue-router';
-import AppLayout from '@/layouts/AppLayout.vue';
-import HomeView from '@/views/HomeView.vue';
 import SignedOutLayout from '@/layouts/SignedOutLayout.vue';
 import { useSessionStore } from '@/stores/session';
 
@@ -15,11 +13,12 @@ declare module 'vue-router' {
 }
 
 export const routes: RouteRecordRaw[] = [
+  // Every page is lazy, the signed-in layout too, so the sign-in page loads none of the app's tables and menus.
   {
     path: '/',
-    component: AppLayout,
+    component: () => import('@/layouts/AppLayout.vue'),
     children: [
-      { path: '', name: 'home', component: HomeView, meta: { title: 'Studies' } },
+      { path: '', name: 'home', component: () => import('@/views/HomeView.vue'), meta: { title: 'Studies' } },
       { path: 'account', name: 'account', component: () => import('@/views/AccountView.vue'), meta: { title: 'Account' } },
       { path: 'team', name: 'team', component: () => import('@/views/TeamView.vue'), meta: { title: 'Team' } },
       { path: 'outbox', name: 'outbox', component: () => import('@/views/OutboxView.vue'), meta: { title: 'Outbox', adminOnly: true } },

@@ -15,6 +15,10 @@ describe('the client', () => {
       // Work Sans ships with the app (no font download at run time).
       expect(assets.some((a) => /work-sans.*\.woff2$/.test(a))).toBe(true);
       expect(existsSync(path.join(outDir, 'favicon.svg'))).toBe(true);
+      // Brotli and gzip copies beside each script, for the server to send as they are.
+      const entry = /src="\/assets\/(index-[\w-]+\.js)"/.exec(html)?.[1];
+      expect(assets).toContain(`${entry}.br`);
+      expect(assets).toContain(`${entry}.gz`);
     } finally {
       rmSync(outDir, { recursive: true, force: true });
     }
