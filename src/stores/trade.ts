@@ -18,6 +18,21 @@ export const CHART_ROW_CAP = 20_000;
 /** Rows per request when loading more than one page (the server's page limit). */
 const BULK_PAGE = MAX_PAGE_ROWS;
 
+/** A view to reopen (from the URL): which sweep, its sort and filters, the ticked designs and the picked point. */
+export interface RestoredView {
+  sweepId: string | null;
+  view: ViewQuery;
+  selected: number[];
+  point: { designIndex: number; index: number } | null;
+}
+
+/** One of the study's target sheets as GET /api/studies/:id/target-sheets lists it. */
+interface StudySheet {
+  id: string;
+  sheet: TargetSheet;
+  presetName?: string | null;
+}
+
 /** One point of GET /api/sweeps/:id/results: the row a sweep stored. */
 export type PointRow = PointResult;
 
@@ -46,6 +61,7 @@ export const useTradeStore = defineStore('trade', () => {
   const span = ref<SteerSpan | null>(null);
   const sheet = ref<TargetSheet | null>(null);
   const sheetName = ref<string | null>(null);
+  let studySheets: StudySheet[] = [];
   const selected = ref<number[]>([]);
   const rows = shallowRef<TradeDesign[]>([]);
   const rowsTotal = ref(0);
@@ -65,22 +81,26 @@ export const useTradeStore = defineStore('trade', () => {
     error.value = e instanceof ApiRequestError ? e.message : e instanceof Error ? e.message : String(e);
   }
 
-  /** Sweeps and target sheet of a study; picks the newest finished sweep unless one is already chosen. */
-  async function load(id: string): Promise<void> {
+  /**
+   * Sweeps and target sheet of a study; picks the sweep `restore` names (a view from the URL) when the study has it,
+   * else the one already chosen, else the newest finished sweep.
+   */
+  async function load(id: string, restore?: RestoredView): Promise<void> {
     studyId.value = id;
     loading.value = true;
     error.value = null;
     try {
       const [list, ts] = await Promise.all([
         api.get<unknown>(`/api/studies/${encodeURIComponent(id)}/sweeps`),
-        api.get<{ sheet: TargetSheet; presetName?: string | null }>(`/api/studies/${encodeURIComponent(id)}/target-sheet`).catch(() => null),
+        api.get<StudySheet[]>(`/api/studies/${encodeURIComponent(id)}/target-sheets`).catch(() => [] as StudySheet[]),
       ]);
       sweeps.value = Array.isArray(list) ? (list as SweepSummary[]) : ((list as { sweeps?: SweepSummary[] }).sweeps ?? []);
-      sheet.value = meaningful(ts?.sheet);
-      sheetName.value = ts?.sheet?.name ?? ts?.presetName ?? null;
+      studySheets = Array.isArray(ts) ? ts : [];
+      useSheetOf(null);
+      const wanted = restore?.sweepId ? sweeps.value.find((s) => s.id === restore.sweepId) : undefined;
       const keep = sweeps.value.find((s) => s.id === sweepId.value);
-      const pick = keep ?? sweeps.value.find((s) => s.status === 'done') ?? sweeps.value[0];
-      if (pick) await openSweep(pick.id);
+      const pick = wanted ?? keep ?? sweeps.value.find((s) => s.status === 'done') ?? sweeps.value[0];
+      if (pick) await openSweep(pick.id, wanted ? restore : undefined);
       else {
         sweepId.value = null;
         rows.value = [];
@@ -92,7 +112,15 @@ export const useTradeStore = defineStore('trade', () => {
     }
   }
 
-  async function openSweep(id: string): Promise<void> {
+  /** Opens a sweep; `restore` (a view from the URL) sets its sort, filters, ticked designs and picked point. */
+  /** The sheet that judges the open sweep: the one it names, else the study's first. */
+  function useSheetOf(sheetId: string | null): void {
+    const ts = studySheets.find((s) => s.id === sheetId) ?? studySheets[0];
+    sheet.value = meaningful(ts?.sheet);
+    sheetName.value = ts?.sheet?.name ?? ts?.presetName ?? null;
+  }
+
+  async function openSweep(id: string, restore?: RestoredView): Promise<void> {
     if (sweepId.value !== id) {
       selected.value = [];
       pickedPoint.value = null;
@@ -100,8 +128,20 @@ export const useTradeStore = defineStore('trade', () => {
       view.value = { sort: [], ranges: {} };
     }
     sweepId.value = id;
+    useSheetOf(sweeps.value.find((s) => s.id === id)?.targetSheetId ?? null);
+    if (restore) {
+      view.value = restore.view;
+      setSelected(restore.selected);
+    }
     span.value = await steerSpan(id);
     await loadChartRows();
+    if (restore?.point) await restorePoint(restore.point);
+  }
+
+  /** The point a URL names, fetched with its design's points (nothing when the sweep has no such point). */
+  async function restorePoint(at: { designIndex: number; index: number }): Promise<void> {
+    const p = (await pointsOf(at.designIndex).catch(() => [])).find((x) => x.index === at.index);
+    if (p && sweepId.value) pickedPoint.value = p;
   }
 
   /**
