@@ -112,7 +112,6 @@ export const useTradeStore = defineStore('trade', () => {
     }
   }
 
-  /** Opens a sweep; `restore` (a view from the URL) sets its sort, filters, ticked designs and picked point. */
   /** The sheet that judges the open sweep: the one it names, else the study's first. */
   function useSheetOf(sheetId: string | null): void {
     const ts = studySheets.find((s) => s.id === sheetId) ?? studySheets[0];
@@ -120,6 +119,7 @@ export const useTradeStore = defineStore('trade', () => {
     sheetName.value = ts?.sheet?.name ?? ts?.presetName ?? null;
   }
 
+  /** Opens a sweep; `restore` (a view from the URL) sets its sort, filters, ticked designs and picked point. */
   async function openSweep(id: string, restore?: RestoredView): Promise<void> {
     if (sweepId.value !== id) {
       selected.value = [];
