@@ -17,6 +17,7 @@ import { compileGrid } from '../../shared/sweep/grid.ts';
 import type { SweepGridInput } from '../../shared/sweep/grid-schema.ts';
 import { SweepGridShapeSchema } from '../../shared/sweep/grid-schema.ts';
 import { HANDSET_28GHZ } from '../../shared/targets/presets.ts';
+import { DEMO_COST_MODEL } from '../../shared/cost/demo-cost-model.ts';
 import { DEMO_USERS } from './accounts.ts';
 
 export const DEMO_STUDY_NAME = 'Kestrel Bay Devices: handset module or small-cell panel';
@@ -109,7 +110,14 @@ export async function seedDemoStudy(ctx: AppContext): Promise<{ studyId: string;
       }
     };
     await insert('sweep_points', points.map((p) => pointRow(sweepId, p)));
-    await insert('sweep_designs', designRows(sweepId, points));
+    // The invented demo cost model (shared/cost/demo-cost-model.ts), version 1, and the sweep priced with it.
+    await m.query(`INSERT INTO study_cost_models (study_id, model, version, updated_by) VALUES ($1, $2::jsonb, 1, $3)`, [
+      study.id,
+      JSON.stringify(DEMO_COST_MODEL),
+      engineer.id,
+    ]);
+    await m.query(`UPDATE sweeps SET cost_model_version = 1 WHERE id = $1`, [sweepId]);
+    await insert('sweep_designs', designRows(sweepId, points, DEMO_COST_MODEL));
     return { studyId: study.id, sweepId };
   });
 }
