@@ -20,6 +20,10 @@ export class Candidate {
   @Column({ type: 'text', default: '' })
   notes!: string;
 
+  /** The target sheet that judges it; null: the study's first sheet. */
+  @Column({ type: 'uuid', nullable: true })
+  targetSheetId!: string | null;
+
   @Column({ type: 'uuid', nullable: true })
   createdBy!: string | null;
 

@@ -25,6 +25,10 @@ export class Sweep {
   @Column({ type: 'jsonb', default: {} })
   constraints!: Record<string, unknown>;
 
+  /** The target sheet that judges it; null: the study's first sheet. */
+  @Column({ type: 'uuid', nullable: true })
+  targetSheetId!: string | null;
+
   @Column({ type: 'text', default: 'queued' })
   status!: SweepStatus;
 

@@ -7,6 +7,9 @@ import { Workspace1764600400000 } from './1764600400000-workspace.ts';
 import { Review1764600600000 } from './1764600600000-review.ts';
 import { Bench1764600500000 } from './1764600500000-bench.ts';
 import { SortIndexes1764600700000 } from './1764600700000-sort-indexes.ts';
+import { TargetSheetsAndDevices1796165946128 } from './1796165946128-target-sheets-and-devices.ts';
+import { ReviewVerdictsAndJudgedSheet1796166016790 } from './1796166016790-review-verdicts-and-judged-sheet.ts';
 import { CostModels1796166102627 } from './1796166102627-cost-models.ts';
+import { ElementPatterns1796167137246 } from './1796167137246-element-patterns.ts';
 
-export const migrations = [Init1764600000000, Studies1764600100000, Accounts1764600200000, Sweeps1764600300000, Workspace1764600400000, Bench1764600500000, Review1764600600000, SortIndexes1764600700000, CostModels1796166102627];
+export const migrations = [Init1764600000000, Studies1764600100000, Accounts1764600200000, Sweeps1764600300000, Workspace1764600400000, Bench1764600500000, Review1764600600000, SortIndexes1764600700000, TargetSheetsAndDevices1796165946128, CostModels1796166102627, ReviewVerdictsAndJudgedSheet1796166016790, ElementPatterns1796167137246];

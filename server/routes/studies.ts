@@ -28,7 +28,7 @@ import {
 } from '../../shared/schemas/study.ts';
 import { studyCandidatesRouter } from './candidates.ts';
 import { studyCostModelRouter } from './cost-model.ts';
-import { studyTargetSheetRouter } from './target-sheets.ts';
+import { studyTargetSheetRouter, studyTargetSheetsRouter } from './target-sheets.ts';
 
 const id = validate({ params: IdParamsSchema });
 const idOf = (req: Request) => String(req.params.id);
@@ -70,5 +70,6 @@ export function studiesRouter(ctx: AppContext): Router {
   router.use('/:id/candidates', studyCandidatesRouter(ctx));
   router.use('/:id/cost-model', studyCostModelRouter(ctx));
   router.use('/:id/target-sheet', studyTargetSheetRouter(ctx));
+  router.use('/:id/target-sheets', studyTargetSheetsRouter(ctx));
   return router;
 }

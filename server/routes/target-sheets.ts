@@ -1,14 +1,33 @@
-/** A study's target sheet under /api/studies/:id/target-sheet, and the presets under /api/target-presets. */
+/**
+ * A study's target sheets: the list and one sheet under /api/studies/:id/target-sheets, the default (first) sheet
+ * under /api/studies/:id/target-sheet, and the presets under /api/target-presets.
+ */
 import { Router } from 'express';
 import type { AppContext } from '../context.ts';
 import { requireAuth, requireRole } from '../middleware/require-auth.ts';
 import { validate } from '../middleware/validate.ts';
-import { getTargetSheet, listPresets, putTargetSheet } from '../services/target-sheet-service.ts';
-import { IdParamsSchema, TargetSheetPutSchema, type TargetSheetPut } from '../../shared/schemas/study.ts';
+import {
+  createTargetSheet,
+  deleteTargetSheet,
+  getTargetSheet,
+  getTargetSheetById,
+  listPresets,
+  listTargetSheets,
+  putTargetSheet,
+  putTargetSheetById,
+} from '../services/target-sheet-service.ts';
+import {
+  IdParamsSchema,
+  SheetParamsSchema,
+  TargetSheetCreateSchema,
+  TargetSheetPutSchema,
+  type TargetSheetPut,
+} from '../../shared/schemas/study.ts';
 
 const id = validate({ params: IdParamsSchema });
+const sheetParams = validate({ params: SheetParamsSchema });
 
-/** Mounted by the studies router; mergeParams brings the study's :id. */
+/** The study's default sheet. Mounted by the studies router; mergeParams brings the study's :id. */
 export function studyTargetSheetRouter(ctx: AppContext): Router {
   const router = Router({ mergeParams: true });
   router.get('/', requireAuth, id, async (req, res) => {
@@ -16,6 +35,28 @@ export function studyTargetSheetRouter(ctx: AppContext): Router {
   });
   router.put('/', requireRole('engineer'), id, validate({ body: TargetSheetPutSchema }), async (req, res) => {
     res.json(await putTargetSheet(ctx, req.user!, String(req.params.id), req.body as TargetSheetPut));
+  });
+  return router;
+}
+
+/** Every sheet of the study. Mounted by the studies router; mergeParams brings the study's :id. */
+export function studyTargetSheetsRouter(ctx: AppContext): Router {
+  const router = Router({ mergeParams: true });
+  router.get('/', requireAuth, id, async (req, res) => {
+    res.json(await listTargetSheets(ctx, req.user!, String(req.params.id)));
+  });
+  router.post('/', requireRole('engineer'), id, validate({ body: TargetSheetCreateSchema }), async (req, res) => {
+    res.status(201).json(await createTargetSheet(ctx, req.user!, String(req.params.id), req.body as TargetSheetPut));
+  });
+  router.get('/:sheetId', requireAuth, sheetParams, async (req, res) => {
+    res.json(await getTargetSheetById(ctx, req.user!, String(req.params.id), String(req.params.sheetId)));
+  });
+  router.put('/:sheetId', requireRole('engineer'), sheetParams, validate({ body: TargetSheetPutSchema }), async (req, res) => {
+    res.json(await putTargetSheetById(ctx, req.user!, String(req.params.id), String(req.params.sheetId), req.body as TargetSheetPut));
+  });
+  router.delete('/:sheetId', requireRole('engineer'), sheetParams, async (req, res) => {
+    await deleteTargetSheet(ctx, req.user!, String(req.params.id), String(req.params.sheetId));
+    res.status(204).end();
   });
   return router;
 }

@@ -1,6 +1,6 @@
 /**
  * The demo study for `npm start`: an invented scenario in which Kestrel Bay Devices (an invented company) choose
- * between handset antenna modules and a small-cell panel. It has candidates, the handset target sheet and a
+ * between handset antenna modules and a small-cell panel. It has candidates, both target sheets (handset and small cell) and a
  * finished sweep computed here with the engine, so a new user opens a full trade table and charts at once.
  * Idempotent: the study is found by its name in the demo team and nothing is written twice.
  */
@@ -16,7 +16,7 @@ import { evaluateRange } from '../../shared/sweep/evaluate-range.ts';
 import { compileGrid } from '../../shared/sweep/grid.ts';
 import type { SweepGridInput } from '../../shared/sweep/grid-schema.ts';
 import { SweepGridShapeSchema } from '../../shared/sweep/grid-schema.ts';
-import { HANDSET_28GHZ } from '../../shared/targets/presets.ts';
+import { HANDSET_28GHZ, SMALL_CELL_39GHZ } from '../../shared/targets/presets.ts';
 import { DEMO_COST_MODEL } from '../../shared/cost/demo-cost-model.ts';
 import { DEMO_USERS } from './accounts.ts';
 
@@ -24,11 +24,12 @@ export const DEMO_STUDY_NAME = 'Kestrel Bay Devices: handset module or small-cel
 export const DEMO_SWEEP_NAME = 'Handset module, 28 GHz: size, pitch, taper and phase bits';
 
 /** Invented candidates of the scenario (every figure made up for the demo). */
-const CANDIDATES: { name: string; notes: string; design: DesignInput }[] = [
+const CANDIDATES: { name: string; notes: string; design: DesignInput; sheet: 'handset' | 'smallCell' }[] = [
   {
     name: 'Handset edge module 1×4',
     notes: 'Invented: four patches along the phone edge, one beamformer chip.',
     design: { frequencyGHz: 28, nx: 4, ny: 1, dxMm: 5.35, phaseBits: 6, element: { kind: 'cosine', q: 1.5 }, channelPowerDbm: 10, steerAzDeg: 30 },
+    sheet: 'handset',
   },
   {
     name: 'Handset module 2×4, Taylor',
@@ -37,6 +38,7 @@ const CANDIDATES: { name: string; notes: string; design: DesignInput }[] = [
       frequencyGHz: 28, nx: 4, ny: 2, dxMm: 5.35, taperX: { kind: 'taylor', sllDb: 25, nbar: 4 }, phaseBits: 6,
       element: { kind: 'cosine', q: 1.5 }, channelPowerDbm: 10,
     },
+    sheet: 'handset',
   },
   {
     name: 'Small-cell panel 8×8, 39 GHz',
@@ -45,6 +47,8 @@ const CANDIDATES: { name: string; notes: string; design: DesignInput }[] = [
       frequencyGHz: 39, nx: 8, ny: 8, dxMm: 3.85, taperX: { kind: 'taylor', sllDb: 25, nbar: 4 }, taperY: { kind: 'taylor', sllDb: 25, nbar: 4 },
       phaseBits: 6, element: { kind: 'tr38901' }, channelPowerDbm: 18,
     },
+    // Judged against the small-cell sheet: against the handset sheet every 39 GHz panel fails.
+    sheet: 'smallCell',
   },
 ];
 
@@ -87,16 +91,23 @@ export async function seedDemoStudy(ctx: AppContext): Promise<{ studyId: string;
         'and weigh it against a 39 GHz small-cell panel. Fewer channels save cost; the target sheet sets the floor.',
       visibility: 'team',
     });
+    // Both presets as sheets: the handset one first (the study's default), then the small cell's.
+    const sheets = m.getRepository(TargetSheetRow);
+    const handset = await sheets.save(sheets.create({ studyId: study.id, preset: HANDSET_28GHZ.id, sheet: HANDSET_28GHZ.sheet, position: 0 }));
+    const smallCell = await sheets.save(sheets.create({ studyId: study.id, preset: SMALL_CELL_39GHZ.id, sheet: SMALL_CELL_39GHZ.sheet, position: 1 }));
+    const sheetIds = { handset: handset.id, smallCell: smallCell.id };
     await m.getRepository(Candidate).save(
-      CANDIDATES.map((c, position) => ({ studyId: study.id, name: c.name, notes: c.notes, design: DesignSchema.parse(c.design), createdBy: engineer.id, position })),
+      CANDIDATES.map((c, position) => ({
+        studyId: study.id, name: c.name, notes: c.notes, design: DesignSchema.parse(c.design), createdBy: engineer.id, position,
+        targetSheetId: sheetIds[c.sheet],
+      })),
     );
-    await m.getRepository(TargetSheetRow).save({ studyId: study.id, preset: HANDSET_28GHZ.id, sheet: HANDSET_28GHZ.sheet });
 
     const [sweep] = (await m.query(
       `INSERT INTO sweeps (study_id, name, grid, constraints, status, points_total, points_done, points_failed, designs_total,
-         angles_per_design, chunks_total, engine_version, created_by, started_at, finished_at)
-       VALUES ($1, $2, $3, '{}', 'done', $4, $4, $5, $6, $7, 1, $8, $9, now(), now()) RETURNING id`,
-      [study.id, DEMO_SWEEP_NAME, JSON.stringify(DEMO_GRID), compiled.points, failed, compiled.designs, compiled.anglesPerDesign, ENGINE_VERSION, engineer.id],
+         angles_per_design, chunks_total, engine_version, created_by, started_at, finished_at, target_sheet_id)
+       VALUES ($1, $2, $3, '{}', 'done', $4, $4, $5, $6, $7, 1, $8, $9, now(), now(), $10) RETURNING id`,
+      [study.id, DEMO_SWEEP_NAME, JSON.stringify(DEMO_GRID), compiled.points, failed, compiled.designs, compiled.anglesPerDesign, ENGINE_VERSION, engineer.id, handset.id],
     )) as { id: string }[];
     const sweepId = sweep!.id;
     // One finished chunk covering every point, so recovery never sees work left to do.

@@ -6,6 +6,7 @@ import type { CandidateCreate, CandidatePatch } from '../../shared/schemas/study
 import { audit } from './audit-service.ts';
 import { touchStudy } from './study-service.ts';
 import { findInStudy, findStudyFor, type StudyNeed } from './study-access.ts';
+import { assertSheetOfStudy } from './target-sheet-service.ts';
 
 export async function listCandidates(ctx: AppContext, user: AuthUser, studyId: string): Promise<Candidate[]> {
   await findStudyFor(ctx, user, studyId, 'read');
@@ -16,6 +17,7 @@ export async function listCandidates(ctx: AppContext, user: AuthUser, studyId: s
 export async function createCandidate(ctx: AppContext, user: AuthUser, studyId: string, input: CandidateCreate): Promise<Candidate> {
   await findStudyFor(ctx, user, studyId, 'edit');
   return ctx.db.transaction(async (m) => {
+    await assertSheetOfStudy(m, studyId, input.targetSheetId);
     const [{ next }] = (await m.query(
       `SELECT COALESCE(max(position) + 1, 0)::int AS next FROM candidates WHERE study_id = $1`,
       [studyId],
@@ -40,6 +42,7 @@ export async function getCandidate(ctx: AppContext, user: AuthUser, id: string):
 export async function patchCandidate(ctx: AppContext, user: AuthUser, id: string, patch: CandidatePatch): Promise<Candidate> {
   const candidate = await candidateFor(ctx, user, id, 'edit');
   return ctx.db.transaction(async (m) => {
+    await assertSheetOfStudy(m, candidate.studyId, patch.targetSheetId);
     const saved = await m.getRepository(Candidate).save(Object.assign(candidate, patch));
     await touchStudy(m, candidate.studyId);
     return saved;

@@ -47,7 +47,8 @@ export async function listStudies(
          FROM study_shares sh JOIN users su ON su.id = sh.user_id WHERE sh.study_id = s.id), '[]'::json) AS "sharedWith"
      FROM studies s
      JOIN users u ON u.id = s.owner_id
-     LEFT JOIN target_sheets ts ON ts.study_id = s.id
+     LEFT JOIN LATERAL (SELECT t.preset, t.sheet FROM target_sheets t WHERE t.study_id = s.id
+       ORDER BY t.position, t.created_at, t.id LIMIT 1) ts ON true
      WHERE ${visible} AND (CAST(:archived AS boolean) OR s.archived_at IS NULL)
        AND (CAST(:onlyId AS uuid) IS NULL OR s.id = CAST(:onlyId AS uuid))
      ORDER BY s.updated_at DESC, s.name`,
@@ -111,17 +112,31 @@ export async function duplicateStudy(ctx: AppContext, user: AuthUser, studyId: s
         archivedAt: null,
       }),
     );
+    // Sheets first, so each copied candidate names the copy of its sheet.
+    const sheets = await m.getRepository(TargetSheetRow).find({ where: { studyId: source.id }, order: SHEET_ORDER });
+    const sheetIds = new Map<string, string>();
+    for (const sh of sheets) {
+      const saved = await m.getRepository(TargetSheetRow).save(
+        m.getRepository(TargetSheetRow).create({ studyId: copy.id, preset: sh.preset, sheet: sh.sheet, position: sh.position }),
+      );
+      sheetIds.set(sh.id, saved.id);
+    }
     const candidates = await m.getRepository(Candidate).find({ where: { studyId: source.id }, order: { position: 'ASC' } });
     if (candidates.length > 0) {
       await m.getRepository(Candidate).insert(
-        candidates.map((c) => ({ studyId: copy.id, name: c.name, design: c.design, notes: c.notes, position: c.position, createdBy: user.id })),
+        candidates.map((c) => ({
+          studyId: copy.id, name: c.name, design: c.design, notes: c.notes, position: c.position, createdBy: user.id,
+          targetSheetId: c.targetSheetId ? (sheetIds.get(c.targetSheetId) ?? null) : null,
+        })),
       );
     }
-    const sheet = await m.getRepository(TargetSheetRow).findOneBy({ studyId: source.id });
-    if (sheet) await m.getRepository(TargetSheetRow).insert({ studyId: copy.id, preset: sheet.preset, sheet: sheet.sheet });
     return copy;
   });
 }
+
+const SHEET_ORDER = { position: 'ASC', createdAt: 'ASC', id: 'ASC' } as const;
+/** In an export, a sheet reference appears only when there is one (files stay as they were for studies without). */
+const withSheetIndex = (i: number | null): { targetSheetIndex?: number } => (i === null ? {} : { targetSheetIndex: i });
 
 /** Marks the study changed (its candidates or sheet moved), so the list's "last change" is honest. */
 export async function touchStudy(m: EntityManager, studyId: string): Promise<void> {
@@ -129,7 +144,7 @@ export async function touchStudy(m: EntityManager, studyId: string): Promise<voi
 }
 
 /** Sweep definitions of a study, read without depending on the sweeps feature's column layout. */
-async function sweepDefinitions(m: EntityManager, studyId: string): Promise<SweepDefinition[]> {
+async function sweepDefinitions(m: EntityManager, studyId: string, sheetIndex: (id: unknown) => number | null): Promise<SweepDefinition[]> {
   if (!(await hasTable(m, 'sweeps'))) return [];
   const rows: { row: Record<string, unknown> }[] = await m.query(
     `SELECT to_jsonb(sw) AS row FROM sweeps sw WHERE sw.study_id = $1 ORDER BY sw.created_at`,
@@ -142,6 +157,7 @@ async function sweepDefinitions(m: EntityManager, studyId: string): Promise<Swee
       name: String(row.name ?? 'sweep'),
       grid: row.grid as Record<string, unknown>,
       constraints: isObject(row.constraints) ? row.constraints : null,
+      ...withSheetIndex(sheetIndex(row.target_sheet_id)),
     }));
 }
 
@@ -150,15 +166,21 @@ export async function exportStudy(ctx: AppContext, user: AuthUser, studyId: stri
   const study = await findStudyFor(ctx, user, studyId, 'read');
   const m = ctx.db.manager;
   const candidates = await m.getRepository(Candidate).find({ where: { studyId }, order: { position: 'ASC', createdAt: 'ASC' } });
-  const sheet = await m.getRepository(TargetSheetRow).findOneBy({ studyId });
+  const sheets = await m.getRepository(TargetSheetRow).find({ where: { studyId }, order: SHEET_ORDER });
+  const sheet = sheets[0];
+  const sheetIndex = (id: unknown) => {
+    const i = sheets.findIndex((sh) => sh.id === id);
+    return i >= 0 ? i : null;
+  };
   return {
     format: STUDY_EXPORT_FORMAT,
     version: STUDY_EXPORT_VERSION,
     exportedAt: new Date().toISOString(),
     study: { name: study.name, description: study.description, visibility: study.visibility },
-    candidates: candidates.map((c) => ({ name: c.name, design: c.design, notes: c.notes })),
+    candidates: candidates.map((c) => ({ name: c.name, design: c.design, notes: c.notes, ...withSheetIndex(sheetIndex(c.targetSheetId)) })),
     targetSheet: sheet ? { preset: sheet.preset, sheet: sheet.sheet } : null,
-    sweeps: await sweepDefinitions(m, studyId),
+    targetSheets: sheets.map((sh) => ({ preset: sh.preset, sheet: sh.sheet })),
+    sweeps: await sweepDefinitions(m, studyId, sheetIndex),
   };
 }
 
@@ -175,14 +197,21 @@ export async function importStudy(ctx: AppContext, user: AuthUser, file: StudyEx
     const study = await m.getRepository(Study).save(
       m.getRepository(Study).create({ ...file.study, teamId: user.teamId, ownerId: user.id, archivedAt: null }),
     );
+    // A file from before several sheets carries only targetSheet.
+    const sheets = file.targetSheets ?? (file.targetSheet ? [file.targetSheet] : []);
+    const sheetIds: string[] = [];
+    for (const [position, sh] of sheets.entries()) {
+      const preset = sh.preset && findPreset(sh.preset) ? sh.preset : null;
+      const saved = await m.getRepository(TargetSheetRow).save(m.getRepository(TargetSheetRow).create({ studyId: study.id, preset, sheet: sh.sheet, position }));
+      sheetIds.push(saved.id);
+    }
     if (file.candidates.length > 0) {
       await m.getRepository(Candidate).insert(
-        file.candidates.map((c, position) => ({ studyId: study.id, name: c.name, design: c.design, notes: c.notes, position, createdBy: user.id })),
+        file.candidates.map((c, position) => ({
+          studyId: study.id, name: c.name, design: c.design, notes: c.notes, position, createdBy: user.id,
+          targetSheetId: c.targetSheetIndex == null ? null : (sheetIds[c.targetSheetIndex] ?? null),
+        })),
       );
-    }
-    if (file.targetSheet) {
-      const preset = file.targetSheet.preset && findPreset(file.targetSheet.preset) ? file.targetSheet.preset : null;
-      await m.getRepository(TargetSheetRow).insert({ studyId: study.id, preset, sheet: file.targetSheet.sheet });
     }
     return { study, candidateCount: file.candidates.length, sweeps: file.sweeps };
   });

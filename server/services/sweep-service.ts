@@ -11,6 +11,7 @@ import type { AppContext } from '../context.ts';
 import { FINISHED_STATUSES, Sweep, type SweepStatus } from '../entities/sweep.ts';
 import { Conflict, invalidInput } from '../errors.ts';
 import { findInStudy, findStudyFor, type StudyNeed } from './study-access.ts';
+import { assertSheetOfStudy } from './target-sheet-service.ts';
 
 export interface SweepProgress {
   id: string;
@@ -28,6 +29,8 @@ export interface SweepProgress {
   etaSeconds: number | null;
   engineVersion: string;
   error: string | null;
+  /** The sheet that judges its designs; null: the study's first. */
+  targetSheetId: string | null;
   createdAt: Date;
   startedAt: Date | null;
   finishedAt: Date | null;
@@ -53,6 +56,7 @@ export function progressOf(s: Sweep, now = Date.now()): SweepProgress {
     etaSeconds: eta,
     engineVersion: s.engineVersion,
     error: s.error,
+    targetSheetId: s.targetSheetId,
     createdAt: s.createdAt,
     startedAt: s.startedAt,
     finishedAt: s.finishedAt,
@@ -79,10 +83,11 @@ export async function createSweep(ctx: AppContext, user: AuthUser, studyId: stri
   const designsPerChunk = Math.max(1, Math.floor(TARGET_CHUNK_POINTS / grid.anglesPerDesign));
   const chunks = Math.ceil(grid.designs / designsPerChunk);
   const id = await ctx.db.transaction(async (m) => {
+    await assertSheetOfStudy(m, studyId, body.targetSheetId);
     const [row] = (await m.query(
-      `INSERT INTO sweeps (study_id, name, grid, constraints, points_total, designs_total, angles_per_design, chunks_total, engine_version, created_by)
-       VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10) RETURNING id`,
-      [studyId, body.name, JSON.stringify(body.grid), JSON.stringify(body.constraints), grid.points, grid.designs, grid.anglesPerDesign, chunks, ENGINE_VERSION, user.id],
+      `INSERT INTO sweeps (study_id, name, grid, constraints, points_total, designs_total, angles_per_design, chunks_total, engine_version, created_by, target_sheet_id)
+       VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10, $11) RETURNING id`,
+      [studyId, body.name, JSON.stringify(body.grid), JSON.stringify(body.constraints), grid.points, grid.designs, grid.anglesPerDesign, chunks, ENGINE_VERSION, user.id, body.targetSheetId],
     )) as { id: string }[];
     // Chunks of whole designs: chunk g holds designs [g·k, (g+1)·k) with k designs per chunk.
     await m.query(

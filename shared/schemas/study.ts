@@ -54,12 +54,21 @@ export interface StudyListItem {
   createdAt: string;
   updatedAt: string;
   sharedWith: StudyShareSummary[];
+  /** Review state (draft, in review, sent back, signed off), derived from requests, answers and sign-offs. */
+  reviewState?: 'draft' | 'in_review' | 'sent_back' | 'signed_off';
+  /** The later of the study's own last edit and its latest review activity (asked, answered, commented, signed). */
+  lastChangeAt?: string;
 }
 
 export const IdParamsSchema = z.object({ id: z.uuid({ error: 'must be a uuid' }) });
+/** A study's id and one of its target sheets. */
+export const SheetParamsSchema = z.object({ id: z.uuid({ error: 'must be a uuid' }), sheetId: z.uuid({ error: 'must be a uuid' }) });
+
+/** The target sheet that judges a candidate, sweep or device: one of its study's sheets; null = the study's first. */
+export const targetSheetRef = z.uuid({ error: 'must be the id (uuid) of a target sheet of this study, or null' }).nullable();
 
 export const CandidateCreateSchema = z
-  .object({ name, design: DesignSchema, notes: notes.default('') }, { error: 'must be a candidate object' })
+  .object({ name, design: DesignSchema, notes: notes.default(''), targetSheetId: targetSheetRef.optional() }, { error: 'must be a candidate object' })
   .strict();
 export type CandidateCreate = z.output<typeof CandidateCreateSchema>;
 
@@ -70,6 +79,7 @@ export const CandidatePatchSchema = z
       design: DesignSchema.optional(),
       notes: notes.optional(),
       position: z.int({ error: 'must be an integer' }).min(0, 'must be an integer of at least 0').optional(),
+      targetSheetId: targetSheetRef.optional(),
     },
     { error: 'must be an object of changes' },
   )
@@ -83,6 +93,11 @@ export const TargetSheetPutSchema = z
   )
   .strict();
 export type TargetSheetPut = z.output<typeof TargetSheetPutSchema>;
+/** A new sheet of a study: the same body as a replacement. */
+export const TargetSheetCreateSchema = TargetSheetPutSchema;
+
+/** In an export: which of the file's targetSheets judges a candidate or sweep (absent: the first). */
+const sheetIndex = z.int({ error: 'must be the index of a sheet in targetSheets, or null' }).min(0, 'must be at least 0').max(49, 'must be at most 49').nullable().optional();
 
 /** A sweep as it travels in an export: its definition only (results are recomputed, never carried). */
 export const SweepDefinitionSchema = z
@@ -91,6 +106,7 @@ export const SweepDefinitionSchema = z
       name,
       grid: z.record(z.string(), z.unknown(), { error: 'must be an object of design fields' }),
       constraints: z.record(z.string(), z.unknown(), { error: 'must be an object' }).nullable().optional(),
+      targetSheetIndex: sheetIndex,
     },
     { error: 'must be a sweep definition {name, grid, constraints?}' },
   )
@@ -112,7 +128,7 @@ export const StudyExportSchema = z
         .strip(),
       candidates: z
         .array(
-          z.object({ name, design: DesignSchema, notes: notes.default('') }, { error: 'must be a candidate object' }).strip(),
+          z.object({ name, design: DesignSchema, notes: notes.default(''), targetSheetIndex: sheetIndex }, { error: 'must be a candidate object' }).strip(),
           { error: 'must be a list of candidates' },
         )
         .max(500, 'must hold at most 500 candidates')
@@ -122,6 +138,14 @@ export const StudyExportSchema = z
         .strip()
         .nullable()
         .default(null),
+      /** Every sheet of the study, in order (files written before several sheets only carry targetSheet). */
+      targetSheets: z
+        .array(
+          z.object({ preset: z.string().max(100).nullable().default(null), sheet: TargetSheetSchema }, { error: 'must be {preset, sheet}' }).strip(),
+          { error: 'must be a list of {preset, sheet}' },
+        )
+        .max(50, 'must hold at most 50 sheets')
+        .optional(),
       sweeps: z.array(SweepDefinitionSchema, { error: 'must be a list of sweep definitions' }).max(200).default([]),
     },
     { error: 'must be a Lobewise study file (a JSON object)' },

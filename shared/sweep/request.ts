@@ -13,6 +13,8 @@ export const SweepRequestSchema = z
         .max(200, 'must be a name of 1 to 200 characters'),
       grid: SweepGridSchema,
       constraints: SweepConstraintsSchema.default({}),
+      /** The study's target sheet that judges the sweep's designs; null or absent: the study's first. */
+      targetSheetId: z.uuid({ error: 'must be the id (uuid) of a target sheet of this study, or null' }).nullable().default(null),
     },
     { error: 'must be a sweep object {name, grid, constraints?}' },
   )

@@ -62,6 +62,11 @@ function checkOne(key: LimitKey, f: DesignFigures, sheet: TargetSheet): LimitChe
       return sheet.minPeakEirpDbm == null ? null : atLeast(f.peakEirpDbm, sheet.minPeakEirpDbm);
     case 'minEdgeEirpDbm':
       return sheet.minEdgeEirpDbm == null ? null : atLeast(f.edgeEirpDbm, sheet.minEdgeEirpDbm);
+    // Coverage figures come from a device's coverage (a single design has none: not applicable).
+    case 'minCoverageP50EirpDbm':
+      return sheet.minCoverageP50EirpDbm == null ? null : atLeast(f.coverageP50EirpDbm ?? null, sheet.minCoverageP50EirpDbm);
+    case 'minSectorEirpDbm':
+      return sheet.minSectorEirpDbm == null ? null : atLeast(f.sectorMinEirpDbm ?? null, sheet.minSectorEirpDbm);
     case 'maxScanLossDb':
       return sheet.maxScanLossDb == null ? null : atMost(f.scanLossEdgeDb, sheet.maxScanLossDb);
     case 'hpbwAzDeg':

@@ -34,6 +34,10 @@ export interface DesignFigures {
   dcPowerW?: number | null;
   /** Dissipated W per cm² of the module outline; null like dcPowerW. */
   heatWPerCm2?: number | null;
+  /** A device's EIRP at the 50th percentile over the sphere (dBm); absent for a single design. */
+  coverageP50EirpDbm?: number | null;
+  /** A device's lowest EIRP across the sheet's service sector (dBm); absent for a single design. */
+  sectorMinEirpDbm?: number | null;
 }
 
 /** The fields of a design and of the engine's metrics that the figures read (the engine's types satisfy these). */

@@ -2,6 +2,7 @@
  * Two starting target sheets. Each value carries its basis: a named published standard (with the table, and
  * whether the figure was recalled from memory) or "invented" for a plausible figure of the demo scenario.
  */
+import { PC3_CHECK_NOTE, PC3_PEAK_TABLE, PC3_SPHERICAL_TABLE, pc3Band, pc3Text } from './pc3-bands.ts';
 import type { LimitKey, TargetSheet } from './sheet.ts';
 
 export type Basis = 'standard' | 'invented';
@@ -16,11 +17,12 @@ export interface TargetPreset {
   name: string;
   summary: string;
   sheet: TargetSheet;
-  /** One note per limit the preset sets. */
-  sources: Partial<Record<LimitKey, SourceNote>>;
+  /** One note per limit the preset sets (and the service sector, where it sets one). */
+  sources: Partial<Record<LimitKey | 'serviceSector', SourceNote>>;
 }
 
 const invented = (note = 'invented for the demo scenario'): SourceNote => ({ basis: 'invented', note });
+const N257 = pc3Band('n257')!;
 
 export const HANDSET_28GHZ: TargetPreset = {
   id: 'handset-28ghz',
@@ -33,8 +35,9 @@ export const HANDSET_28GHZ: TargetPreset = {
     maxChannels: 8,
     scanAzDeg: { min: -45, max: 45 },
     scanElDeg: null,
-    minPeakEirpDbm: 22.4,
-    minEdgeEirpDbm: 11.5,
+    band: 'n257',
+    minPeakEirpDbm: N257.minPeakEirp.dbm,
+    minCoverageP50EirpDbm: N257.sphericalP50Eirp.dbm,
     maxScanLossDb: 4,
     hpbwAzDeg: { min: 15, max: 60 },
     hpbwElDeg: null,
@@ -49,11 +52,11 @@ export const HANDSET_28GHZ: TargetPreset = {
     scanAzDeg: invented(),
     minPeakEirpDbm: {
       basis: 'standard',
-      note: '3GPP TS 38.101-2 Table 6.2.1.3-1: minimum peak EIRP of a power-class-3 UE, 22.4 dBm in n257, n258 and n261 (recalled from memory; check the current release)',
+      note: `${PC3_PEAK_TABLE}: minimum peak EIRP of a power-class-3 UE, ${pc3Text('n257', 'minPeakEirp')}. Other bands: ${pc3Text('n258', 'minPeakEirp')}; ${pc3Text('n260', 'minPeakEirp')}; ${pc3Text('n261', 'minPeakEirp')}`,
     },
-    minEdgeEirpDbm: {
+    minCoverageP50EirpDbm: {
       basis: 'standard',
-      note: '3GPP TS 38.101-2 Table 6.2.1.3-3: PC3 spherical-coverage EIRP at the 50th percentile, 11.5 dBm in n257/n261 (recalled from memory). The standard states it over the sphere; using it as an edge-of-scan floor is our approximation',
+      note: `${PC3_SPHERICAL_TABLE}: power-class-3 spherical coverage, EIRP at the 50th percentile of the CDF over the whole sphere (the best beam of any module in each direction), ${pc3Text('n257', 'sphericalP50Eirp')}. Other bands: ${pc3Text('n258', 'sphericalP50Eirp')}; ${pc3Text('n260', 'sphericalP50Eirp')}; ${pc3Text('n261', 'sphericalP50Eirp')}. Judged on a device's coverage, not on one module's edge of scan (${PC3_CHECK_NOTE})`,
     },
     maxScanLossDb: invented(),
     hpbwAzDeg: invented(),
@@ -82,6 +85,8 @@ export const SMALL_CELL_39GHZ: TargetPreset = {
     maxSllDb: -18,
     noGratingLobeInScan: true,
     maxPointingErrorDeg: 1.5,
+    serviceSector: { azMinDeg: -50, azMaxDeg: 50, elMinDeg: -10, elMaxDeg: 10 },
+    minSectorEirpDbm: 43,
   },
   sources: {
     maxApertureXMm: invented('invented: panel size of the demo scenario'),
@@ -93,6 +98,8 @@ export const SMALL_CELL_39GHZ: TargetPreset = {
       'invented: 3GPP TS 38.104 leaves base-station EIRP to the manufacturer\'s declaration, so there is no published minimum to quote',
     ),
     minEdgeEirpDbm: invented(),
+    serviceSector: invented('invented: the street sector the demo panel must serve, device frame'),
+    minSectorEirpDbm: invented('invented: the lowest EIRP the demo panel must hold anywhere in its sector with its codebook, dips between beams included'),
     maxScanLossDb: invented(),
     hpbwAzDeg: invented(),
     hpbwElDeg: invented(),

@@ -40,6 +40,22 @@ const WidthRangeSchema = z
   .strict()
   .refine((r) => r.min == null || r.max == null || r.min <= r.max, { message: 'min must not exceed max', path: ['min'] });
 
+const azimuth = z
+  .number({ error: 'must be a number from -180 to 180 (degrees)' })
+  .min(-180, 'must be a number from -180 to 180 (degrees)')
+  .max(180, 'must be a number from -180 to 180 (degrees)');
+
+/** The region a small cell must serve, in the device frame (as a coverage sector); EIRP is judged across it. */
+export const ServiceSectorSchema = z
+  .object(
+    { azMinDeg: azimuth, azMaxDeg: azimuth, elMinDeg: angle, elMaxDeg: angle },
+    { error: 'must be a sector {azMinDeg, azMaxDeg, elMinDeg, elMaxDeg} in degrees' },
+  )
+  .strict()
+  .refine((r) => r.azMinDeg < r.azMaxDeg, { message: 'azMinDeg must be less than azMaxDeg', path: ['azMinDeg'] })
+  .refine((r) => r.elMinDeg < r.elMaxDeg, { message: 'elMinDeg must be less than elMaxDeg', path: ['elMinDeg'] });
+export type ServiceSector = z.output<typeof ServiceSectorSchema>;
+
 export const TargetSheetSchema = z
   .object(
     {
@@ -56,6 +72,11 @@ export const TargetSheetSchema = z
       scanElDeg: ScanRangeSchema.nullable().optional(),
       minPeakEirpDbm: eirp,
       minEdgeEirpDbm: eirp,
+      minCoverageP50EirpDbm: eirp,
+      serviceSector: ServiceSectorSchema.nullable().optional(),
+      minSectorEirpDbm: eirp,
+      /** The FR2 band whose power-class-3 values the sheet quotes (the editor fills them from it). */
+      band: z.enum(['n257', 'n258', 'n260', 'n261'], { error: 'must be one of "n257", "n258", "n260", "n261"' }).nullable().optional(),
       maxScanLossDb: z
         .number({ error: 'must be a number from 0 to 60 (dB)' })
         .min(0, 'must be a number from 0 to 60 (dB)')
@@ -114,6 +135,8 @@ export const LIMIT_KEYS = [
   'scanElDeg',
   'minPeakEirpDbm',
   'minEdgeEirpDbm',
+  'minCoverageP50EirpDbm',
+  'minSectorEirpDbm',
   'maxScanLossDb',
   'hpbwAzDeg',
   'hpbwElDeg',
@@ -135,6 +158,8 @@ export const LIMIT_LABELS: Record<LimitKey, string> = {
   scanElDeg: 'Scan range el (°)',
   minPeakEirpDbm: 'Min peak EIRP (dBm)',
   minEdgeEirpDbm: 'Min EIRP at edge of scan (dBm)',
+  minCoverageP50EirpDbm: 'Spherical coverage: min EIRP at the 50th percentile (dBm)',
+  minSectorEirpDbm: 'Min EIRP across the service sector (dBm)',
   maxScanLossDb: 'Max scan loss (dB)',
   hpbwAzDeg: 'HPBW az (°)',
   hpbwElDeg: 'HPBW el (°)',

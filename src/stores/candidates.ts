@@ -15,6 +15,8 @@ export interface CandidateRow {
   design: DesignInput;
   notes: string;
   position: number;
+  /** The study's target sheet that judges it; null: the study's first. */
+  targetSheetId?: string | null;
   createdAt: string;
   updatedAt: string;
 }
@@ -106,6 +108,13 @@ export const useCandidatesStore = defineStore('candidates', () => {
     }
   }
 
+  /** Points the candidate at one of the study's sheets (null: the study's first). */
+  async function setSheet(id: string, targetSheetId: string | null): Promise<void> {
+    const saved = await api.patch<CandidateRow>(`/api/candidates/${id}`, { targetSheetId });
+    const row = list.value.find((c) => c.id === id);
+    if (row) row.targetSheetId = saved.targetSheetId ?? null;
+  }
+
   async function remove(id: string): Promise<void> {
     const index = list.value.findIndex((c) => c.id === id);
     const removed = index >= 0 ? list.value.splice(index, 1)[0] : undefined;
@@ -127,5 +136,5 @@ export const useCandidatesStore = defineStore('candidates', () => {
     overlayIds.value = overlayIds.value.includes(id) ? overlayIds.value.filter((x) => x !== id) : [...overlayIds.value, id];
   }
 
-  return { studyId, list, loading, error, selectedId, selected, overlayIds, overlay, load, create, saveDesign, settled, rename, remove, select, toggleOverlay };
+  return { studyId, list, loading, error, selectedId, selected, overlayIds, overlay, load, create, saveDesign, settled, rename, setSheet, remove, select, toggleOverlay };
 });

@@ -13,7 +13,10 @@ export interface StudyRow extends StudyListItem {
 }
 
 export interface TargetSheetState {
+  /** null only for the default of a study with no saved sheet. */
+  id: string | null;
   studyId: string;
+  position: number;
   preset: string | null;
   presetName: string | null;
   sheet: TargetSheet;
@@ -39,6 +42,8 @@ export const useStudiesStore = defineStore('studies', () => {
   const showArchived = ref(false);
   const current = ref<StudyRow | null>(null);
   const targetSheet = ref<TargetSheetState | null>(null);
+  /** Every sheet of the open study, in order; the first is the default. */
+  const targetSheets = ref<TargetSheetState[]>([]);
   const presets = ref<TargetPreset[]>([]);
 
   const visible = computed(() => list.value.filter((s) => showArchived.value || !s.archivedAt));
@@ -119,6 +124,7 @@ export const useStudiesStore = defineStore('studies', () => {
     if (current.value?.id !== id) {
       current.value = null;
       targetSheet.value = null;
+      targetSheets.value = [];
     }
     current.value = await api.get<StudyRow>(`/api/studies/${id}`);
   }
@@ -133,13 +139,43 @@ export const useStudiesStore = defineStore('studies', () => {
     return targetSheet.value;
   }
 
+  async function loadTargetSheets(studyId: string): Promise<TargetSheetState[]> {
+    targetSheets.value = await api.get<TargetSheetState[]>(`/api/studies/${studyId}/target-sheets`);
+    targetSheet.value = targetSheets.value[0] ?? targetSheet.value;
+    return targetSheets.value;
+  }
+
+  async function addTargetSheet(studyId: string, preset: string | null, sheet: TargetSheet): Promise<TargetSheetState> {
+    const created = await api.post<TargetSheetState>(`/api/studies/${studyId}/target-sheets`, { preset, sheet });
+    await loadTargetSheets(studyId);
+    return created;
+  }
+
+  async function saveTargetSheetById(studyId: string, sheetId: string, preset: string | null, sheet: TargetSheet): Promise<TargetSheetState> {
+    const saved = await api.put<TargetSheetState>(`/api/studies/${studyId}/target-sheets/${sheetId}`, { preset, sheet });
+    await loadTargetSheets(studyId);
+    return saved;
+  }
+
+  async function removeTargetSheet(studyId: string, sheetId: string): Promise<void> {
+    await api.delete(`/api/studies/${studyId}/target-sheets/${sheetId}`);
+    await loadTargetSheets(studyId);
+    if (targetSheets.value.length === 0) await loadTargetSheet(studyId);
+  }
+
+  /** The sheet that judges something naming `sheetId` (the study's first when it names none or a removed one). */
+  function sheetFor(sheetId: string | null | undefined): TargetSheetState | null {
+    return targetSheets.value.find((s) => s.id === sheetId) ?? targetSheets.value[0] ?? targetSheet.value;
+  }
+
   async function loadPresets(): Promise<TargetPreset[]> {
     if (presets.value.length === 0) presets.value = await api.get<TargetPreset[]>('/api/target-presets');
     return presets.value;
   }
 
   return {
-    list, visible, loading, loaded, error, showArchived, current, targetSheet, presets,
+    list, visible, loading, loaded, error, showArchived, current, targetSheet, targetSheets, presets,
     fetchList, create, patch, duplicate, remove, exportFile, importText, open, loadTargetSheet, saveTargetSheet, loadPresets,
+    loadTargetSheets, addTargetSheet, saveTargetSheetById, removeTargetSheet, sheetFor,
   };
 });

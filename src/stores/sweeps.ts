@@ -15,6 +15,8 @@ export interface CandidateSummary {
   id: string;
   name: string;
   design: CandidateDesign;
+  /** The study's target sheet that judges it; null: the study's first. */
+  targetSheetId?: string | null;
 }
 
 export interface SweepSummary {
@@ -26,6 +28,8 @@ export interface SweepSummary {
   pointsFailed?: number;
   createdAt?: string;
   finishedAt?: string | null;
+  /** The study's target sheet that judges its designs; null: the study's first. */
+  targetSheetId?: string | null;
 }
 
 /** One progress message of GET /api/sweeps/:id/events. */
@@ -81,11 +85,11 @@ export const useSweepsStore = defineStore('sweeps', () => {
   }
 
   /** Starts a sweep; the caller shows ApiRequestError.fields beside the form's fields. */
-  async function start(body: { name: string; grid: SweepGridInput; constraints?: SweepConstraints }): Promise<{ id: string; pointsTotal: number }> {
+  async function start(body: { name: string; grid: SweepGridInput; constraints?: SweepConstraints; targetSheetId?: string | null }): Promise<{ id: string; pointsTotal: number }> {
     if (!studyId.value) throw new Error('no study open');
     const created = await api.post<{ id: string; pointsTotal: number }>(`/api/studies/${encodeURIComponent(studyId.value)}/sweeps`, body);
     sweeps.value = [
-      { id: created.id, name: body.name, status: 'queued', pointsTotal: created.pointsTotal, pointsDone: 0, createdAt: new Date().toISOString() },
+      { id: created.id, name: body.name, status: 'queued', pointsTotal: created.pointsTotal, pointsDone: 0, createdAt: new Date().toISOString(), targetSheetId: body.targetSheetId ?? null },
       ...sweeps.value,
     ];
     return created;

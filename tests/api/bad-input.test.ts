@@ -86,6 +86,12 @@ const BODIES: Record<string, BodySpec> = {
     }),
     allowEmpty: ['sheet.name'],
   },
+  'POST /api/studies/:id/target-sheets': {
+    body: () => ({ preset: null, sheet: { name: 'Small cell', minSectorEirpDbm: 43, serviceSector: { azMinDeg: -50, azMaxDeg: 50, elMinDeg: -10, elMaxDeg: 10 } } }),
+  },
+  'PUT /api/studies/:id/target-sheets/:sheetId': {
+    body: () => ({ preset: 'handset-28ghz', sheet: { name: 'Handset', band: 'n257', minPeakEirpDbm: 22.4, minCoverageP50EirpDbm: 11.5 } }),
+  },
   'POST /api/studies/:id/sweeps': {
     body: () => ({ name: 'Spoilt sweep', grid: { frequencyGHz: 28, nx: [4, 8], dxMm: 5.35, steerAzDeg: [0, 30] }, constraints: { maxChannels: 64, maxApertureXMm: 100 } }),
   },
@@ -317,6 +323,7 @@ async function makeResources(): Promise<void> {
   const study = ids.studyId!;
   // A candidate with phase bits, so the bench routes (codes, range data) accept it.
   ids.candidateId = (await must(await as('engineer').post(`/api/studies/${study}/candidates`).send({ name: 'fixture', design: DESIGN }), 'candidate')).id!;
+  ids.sheetId = (await must(await as('engineer').post(`/api/studies/${study}/target-sheets`).send({ preset: null, sheet: { name: 'fixture' } }), 'target sheet')).id!;
   ids.sweepId = (await must(await as('engineer').post(`/api/studies/${study}/sweeps`).send({ name: 'fixture', grid: { frequencyGHz: 28, nx: 4, dxMm: 5.35 } }), 'sweep')).id!;
   ids.commentId = (await must(await as('engineer').post(`/api/studies/${study}/comments`).send({ body: 'fixture' }), 'comment')).id!;
   ids.reviewRequestId = (await must(await as('engineer').post(`/api/studies/${study}/review-requests`).send({ reviewerIds: [world.team.reviewer.id] }), 'review request')).id!;

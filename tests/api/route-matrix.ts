@@ -91,7 +91,8 @@ export const fixtures: Fixture[] = [
       `INSERT INTO candidates (study_id, name, design) VALUES ($1, 'matrix', $2) RETURNING id`,
       [ids.studyId, JSON.stringify({ frequencyGHz: 28, nx: 4, ny: 1, dxMm: 5, dyMm: 5 })],
     );
-    return { candidateId: rows[0]!.id };
+    const [sheet] = (await ctx.db.query(`INSERT INTO target_sheets (study_id, sheet) VALUES ($1, '{"name":"matrix"}') RETURNING id`, [ids.studyId])) as { id: string }[];
+    return { candidateId: rows[0]!.id, sheetId: sheet!.id };
   },
   async function sweeps({ ctx, ids }) {
     const insert = async (status: string) =>
@@ -235,6 +236,11 @@ export const matrix: MatrixRow[] = [
     admin: 200,
     otherTeam: 404,
   },
+  { method: 'GET', path: '/api/studies/:id/target-sheets', params: { id: 'studyId' }, ...member(200), otherTeam: 404 },
+  { method: 'POST', path: '/api/studies/:id/target-sheets', params: { id: 'studyId' }, body: { preset: null, sheet: { name: 'Second' } }, anonymous: 401, reviewer: 403, engineer: 201, admin: 201, otherTeam: 404 },
+  { method: 'GET', path: '/api/studies/:id/target-sheets/:sheetId', params: { id: 'studyId' }, ...member(200), otherTeam: 404 },
+  { method: 'PUT', path: '/api/studies/:id/target-sheets/:sheetId', params: { id: 'studyId' }, body: { preset: null, sheet: { name: 'Renamed' } }, anonymous: 401, reviewer: 403, engineer: 200, admin: 200, otherTeam: 404 },
+  { method: 'DELETE', path: '/api/studies/:id/target-sheets/:sheetId', params: { id: 'studyId' }, anonymous: 401, reviewer: 403, engineer: 204, admin: 204, otherTeam: 404 },
   { method: 'GET', path: '/api/candidates/:id', params: { id: 'candidateId' }, ...member(200), otherTeam: 404 },
   { method: 'PATCH', path: '/api/candidates/:id', params: { id: 'candidateId' }, body: {}, anonymous: 401, reviewer: 403, engineer: 200, admin: 200, otherTeam: 404 },
   { method: 'DELETE', path: '/api/candidates/:id', params: { id: 'candidateId' }, anonymous: 401, reviewer: 403, engineer: 204, admin: 204, otherTeam: 404 },

@@ -62,6 +62,19 @@ describe('seedDemoStudy(ctx)', () => {
     expect(designs.body.total).toBe(96);
   });
 
+  it('holds both sheets and judges the 39 GHz panel against the small-cell one', async () => {
+    const list = (await engineer.get('/api/studies')).body as { id: string; name: string }[];
+    const study = list.find((s) => s.name === DEMO_STUDY_NAME)!;
+    const sheets = (await engineer.get(`/api/studies/${study.id}/target-sheets`)).body as { id: string; preset: string }[];
+    expect(sheets.map((s) => s.preset)).toEqual(['handset-28ghz', 'small-cell-39ghz']);
+    const candidates = (await engineer.get(`/api/studies/${study.id}/candidates`)).body as { design: { frequencyGHz: number }; targetSheetId: string }[];
+    for (const c of candidates) {
+      expect(c.targetSheetId).toBe(c.design.frequencyGHz === 39 ? sheets[1]!.id : sheets[0]!.id);
+    }
+    const sweep = (await engineer.get(`/api/studies/${study.id}/sweeps`)).body[0];
+    expect(sweep.targetSheetId).toBe(sheets[0]!.id);
+  });
+
   it('stores points that match the engine evaluated afresh', async () => {
     const [row] = (await ctx.db.query(
       `SELECT design, metrics FROM sweep_points WHERE error IS NULL ORDER BY point_index LIMIT 1 OFFSET 137`,

@@ -5,7 +5,8 @@ import { HANDSET_28GHZ } from '../../shared/targets/presets.ts';
 import type { TradeDesign } from '../../shared/trade/trade-design.ts';
 import { tradeRow } from './trade-fixtures.ts';
 
-const sheet = HANDSET_28GHZ.sheet;
+// The handset preset plus an edge-of-scan floor of 11.5 dBm invented for this test (the preset sets none).
+const sheet = { ...HANDSET_28GHZ.sheet, minEdgeEirpDbm: 11.5 };
 const cols = tradeColumns({ sheet });
 const leaves = leafColumns(cols);
 const col = (id: string): ColDef<TradeDesign> => {
@@ -40,7 +41,7 @@ describe('tradeColumns({ sheet })', () => {
   });
 
   it('marks a passing figure "cell-pass" and a failing one "cell-fail" against the handset sheet', () => {
-    // Handset preset: at most 8 channels, at least 11.5 dBm at the edge of scan.
+    // Handset preset: at most 8 channels; the test's own floor of 11.5 dBm at the edge of scan.
     expect(classes(col('channels'), tradeRow(0, { channels: 4 }))).toEqual(['cell-pass']);
     expect(classes(col('channels'), tradeRow(1, { channels: 16 }))).toEqual(['cell-fail']);
     expect(classes(col('edgeEirpDbm'), tradeRow(2, { edgeEirpDbm: 9 }))).toEqual(['cell-fail']);

@@ -53,7 +53,8 @@ describe('rankPassing(rows, sheet, terms)', () => {
     tradeRow(3, { channels: 16, edgeEirpDbm: 40 }), // fails: more than 8 channels
     tradeRow(4, { channels: 2, edgeEirpDbm: 5 }), // fails: below 11.5 dBm at the edge
   ];
-  const sheet = HANDSET_28GHZ.sheet;
+  // The handset preset plus an edge-of-scan floor of 11.5 dBm invented for this test (the preset sets none).
+  const sheet = { ...HANDSET_28GHZ.sheet, minEdgeEirpDbm: 11.5 };
 
   it('keeps only passing designs, fewest channels first, then highest EIRP at the edge', () => {
     const terms = RANK_OBJECTIVES.find((o) => o.id === 'channels-edge-eirp')!.terms;
