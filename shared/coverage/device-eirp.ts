@@ -1,5 +1,5 @@
 import type { CoverageModule } from '../schemas/coverage.ts';
-import { gainModel } from './temp-gain-model.ts';
+import { gainModel } from '../engine/index.ts';
 import { deviceDirection } from './device-direction.ts';
 import { moduleAngles, type ModuleAngles } from './module-angles.ts';
 import { moduleFrame, type ModuleFrame } from './module-frame.ts';
