@@ -4,6 +4,7 @@
  * selected to compare (shared by the table and every chart).
  */
 import { defineStore } from 'pinia';
+import type { SweepCostBasis } from '@shared/cost/cost-model.ts';
 import { computed, ref, shallowRef } from 'vue';
 import { api, ApiRequestError } from '@/api/client';
 import type { SweepSummary } from '@/stores/sweeps';
@@ -71,6 +72,8 @@ export const useTradeStore = defineStore('trade', () => {
   const points = new Map<number, Promise<PointRow[]>>();
   /** The one point whose pattern cuts and u-v map the charts draw. */
   const pickedPoint = shallowRef<PointRow | null>(null);
+  /** Which cost model priced the open sweep's cost figures (the designs endpoint says). */
+  const costBasis = ref<SweepCostBasis | null>(null);
 
   const selectedRows = computed(() => {
     const set = new Set(selected.value);
@@ -169,6 +172,7 @@ export const useTradeStore = defineStore('trade', () => {
     const qs = queryString(q, offset, limit, scanWindowParams(sheet.value));
     const body = await api.get<unknown>(`/api/sweeps/${encodeURIComponent(sweepId.value)}/designs?${qs}`);
     const page = pageOf<DesignRowJson>(body);
+    costBasis.value = (body as { cost?: SweepCostBasis }).cost ?? null;
     return { rows: page.rows.map((r) => fromDesignRow(r, span.value)), total: page.total };
   }
 
@@ -229,6 +233,6 @@ export const useTradeStore = defineStore('trade', () => {
 
   return {
     studyId, sweeps, sweepId, span, sheet, sheetName, scanWindow, selected, selectedRows, rows, rowsTotal, loading, error, view, pickedPoint,
-    load, openSweep, fetchPage, fetchAll, setView, pointsOf, setSelected, toggleSelected, csvUrl,
+    load, openSweep, fetchPage, fetchAll, setView, pointsOf, setSelected, toggleSelected, csvUrl, costBasis,
   };
 });
