@@ -21,27 +21,18 @@ import {
 import { audit } from './audit-service.ts';
 import { findStudyFor, studyVisibilityWhere } from './study-access.ts';
 
-/** True once the sweeps feature has created its table; before that every study has 0 sweeps. */
-export async function hasTable(db: EntityManager | AppContext['db'], table: string): Promise<boolean> {
-  const rows: { present: boolean }[] = await db.query(`SELECT to_regclass($1) IS NOT NULL AS present`, [`public.${table}`]);
-  return rows[0]?.present === true;
-}
-
 /** The caller's visible studies, newest change first; archived ones only when asked. */
 export async function listStudies(
   ctx: AppContext,
   user: AuthUser,
   options: { archived: boolean; id?: string },
 ): Promise<StudyListItem[]> {
-  const sweepCount = (await hasTable(ctx.db, 'sweeps'))
-    ? `(SELECT count(*)::int FROM sweeps sw WHERE sw.study_id = s.id)`
-    : `0`;
   const [visible, visibleParams] = studyVisibilityWhere(user, 's');
   const [sql, params] = ctx.db.driver.escapeQueryWithParameters(
     `SELECT s.id, s.name, s.description, s.visibility, s.owner_id AS "ownerId", u.name AS "ownerName",
        ts.preset AS "targetSheetPreset", ts.sheet->>'name' AS "targetSheetName",
        (SELECT count(*)::int FROM candidates c WHERE c.study_id = s.id) AS "candidateCount",
-       ${sweepCount} AS "sweepCount",
+       (SELECT count(*)::int FROM sweeps sw WHERE sw.study_id = s.id) AS "sweepCount",
        s.archived_at AS "archivedAt", s.created_at AS "createdAt", s.updated_at AS "updatedAt",
        COALESCE((SELECT json_agg(json_build_object('userId', su.id, 'name', su.name, 'access', sh.access) ORDER BY su.name)
          FROM study_shares sh JOIN users su ON su.id = sh.user_id WHERE sh.study_id = s.id), '[]'::json) AS "sharedWith"
@@ -143,9 +134,8 @@ export async function touchStudy(m: EntityManager, studyId: string): Promise<voi
   await m.query(`UPDATE studies SET updated_at = now() WHERE id = $1`, [studyId]);
 }
 
-/** Sweep definitions of a study, read without depending on the sweeps feature's column layout. */
+/** Sweep definitions of a study, read without depending on the sweeps table's column layout. */
 async function sweepDefinitions(m: EntityManager, studyId: string, sheetIndex: (id: unknown) => number | null): Promise<SweepDefinition[]> {
-  if (!(await hasTable(m, 'sweeps'))) return [];
   const rows: { row: Record<string, unknown> }[] = await m.query(
     `SELECT to_jsonb(sw) AS row FROM sweeps sw WHERE sw.study_id = $1 ORDER BY sw.created_at`,
     [studyId],
