@@ -27,7 +27,8 @@ describe('exportTable + toCsv', () => {
   it('is RFC 4180 CSV: one line per row, CRLF, quoting only where needed', () => {
     const csv = toCsv({ header: ['a', 'b'], rows: [['x, y', 'say "hi"'], [1.5, null]] });
     expect(csv).toBe('a,b\r\n"x, y","say ""hi"""\r\n1.5,\r\n');
-    expect(toCsv(table).split('\r\n')).toHaveLength(rows.length + 2);
+    // Header, units row, the rows, and the empty string after the last CRLF.
+    expect(toCsv(table).split('\r\n')).toHaveLength(rows.length + 3);
   });
 
   it('builds an Excel workbook that exceljs reads back with the same cells', async () => {
@@ -39,8 +40,9 @@ describe('exportTable + toCsv', () => {
     // Excel forbids ':' and '/' in sheet names.
     expect(ws.name).toBe('Handset  28 GHz   sweep');
     expect(ws.getRow(1).getCell(1).value).toBe('Target sheet');
-    expect(ws.getRow(2).getCell(2).value).toBe(7);
-    expect(ws.getRow(3).getCell(1).value).toBe('fail');
-    expect(ws.rowCount).toBe(3);
+    // Row 2 is the units row.
+    expect(ws.getRow(3).getCell(2).value).toBe(7);
+    expect(ws.getRow(4).getCell(1).value).toBe('fail');
+    expect(ws.rowCount).toBe(4);
   });
 });

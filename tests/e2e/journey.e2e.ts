@@ -115,8 +115,12 @@ describe('the main job, end to end', () => {
     const file = await download;
     expect(file.suggestedFilename()).toMatch(/\.csv$/);
     const csv = readFileSync((await file.path())!, 'utf8').trim().split(/\r?\n/);
-    expect(csv.length).toBe(3); // the header and the two designs left by the filter
-    expect(csv[0]).toMatch(/,/);
+    // The header block names the study and the filter; then the header, the units row and the two designs left.
+    expect(csv[0]).toBe(`Study,${name}`);
+    expect(csv.find((l) => l.startsWith('Filters,'))).toBe('Filters,Design # from 1 to 2');
+    const head = csv.findIndex((l) => l.startsWith('Target sheet,Design #,'));
+    expect(head).toBeGreaterThan(0);
+    expect(csv.slice(head + 2)).toHaveLength(2);
 
     // Clear the filter, tick two designs to compare, and open the charts.
     await header.hover();
