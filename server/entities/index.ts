@@ -13,6 +13,7 @@ import { Sweep } from './sweep.ts';
 import { Calibration } from './calibration.ts';
 import { RangeUpload } from './range-upload.ts';
 import { StudyCostModel } from './cost-model.ts';
+import { ElementPatternRow } from './element-pattern.ts';
 
 export { Study, StudyShare, Team, User };
-export const entities = [Team, User, Study, StudyShare, ...accountEntities, Candidate, TargetSheetRow, Comment, ReviewRequest, Decision, Sweep, Calibration, RangeUpload, StudyCostModel];
+export const entities = [Team, User, Study, StudyShare, ...accountEntities, Candidate, TargetSheetRow, Comment, ReviewRequest, Decision, Sweep, Calibration, RangeUpload, StudyCostModel, ElementPatternRow];

@@ -18,6 +18,7 @@ import { targetPresetsRouter } from './target-sheets.ts';
 import { reviewRouter } from './review.ts';
 import { benchRouter } from './bench.ts';
 import { rangeDataRouter } from './range-data.ts';
+import { elementPatternsRouter } from './element-patterns.ts';
 import { coverageRouter } from './coverage.ts';
 
 export function apiRouter(ctx: AppContext): Router {
@@ -38,6 +39,7 @@ export function apiRouter(ctx: AppContext): Router {
   api.use(reviewRouter(ctx));
   api.use(benchRouter(ctx));
   api.use(rangeDataRouter(ctx));
+  api.use(elementPatternsRouter(ctx));
   api.use('/coverage', coverageRouter());
   // Anything else under /api is a JSON 404, never the client's index.html.
   api.use((req, _res, next) => next(NotFound(`route ${req.method} ${req.baseUrl}${req.path}`)));

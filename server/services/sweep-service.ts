@@ -11,6 +11,7 @@ import type { AppContext } from '../context.ts';
 import { FINISHED_STATUSES, Sweep, type SweepStatus } from '../entities/sweep.ts';
 import { Conflict, invalidInput } from '../errors.ts';
 import { findInStudy, findStudyFor, type StudyNeed } from './study-access.ts';
+import { resolveGridElements } from './element-pattern-service.ts';
 import { assertSheetOfStudy } from './target-sheet-service.ts';
 
 export interface SweepProgress {
@@ -66,6 +67,8 @@ export function progressOf(s: Sweep, now = Date.now()): SweepProgress {
 /** Creates the sweep and its chunks; the sweep runner sends them to the queue. 400 when over the limit or empty. */
 export async function createSweep(ctx: AppContext, user: AuthUser, studyId: string, body: SweepRequest): Promise<{ id: string; pointsTotal: number }> {
   await findStudyFor(ctx, user, studyId, 'edit');
+  // Table elements carry their pattern from here on: the stored grid is exactly what the worker threads evaluate.
+  body = { ...body, grid: await resolveGridElements(ctx, studyId, body.grid) };
   let grid;
   try {
     grid = compileGrid(body.grid, body.constraints);

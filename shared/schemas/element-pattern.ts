@@ -50,3 +50,15 @@ export const ElementPatternSchema = z
     }
   });
 export type ElementPattern = z.output<typeof ElementPatternSchema>;
+
+/** Form fields beside the uploaded pattern file. */
+export const ElementPatternUploadSchema = z
+  .object({
+    name: z
+      .string({ error: 'must be text of 1 to 200 characters' })
+      .trim()
+      .min(1, 'must be text of 1 to 200 characters')
+      .max(200, 'must be text of 1 to 200 characters')
+      .optional(),
+  })
+  .strict();

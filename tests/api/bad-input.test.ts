@@ -118,6 +118,7 @@ const NO_BODY = new Set(['POST /api/auth/logout', 'POST /api/studies/:id/duplica
 /** Routes that take a multipart form (a CSV in field `file`) and their valid text fields. */
 const MULTIPART: Record<string, { fields: Record<string, string>; numeric: string[] }> = {
   'POST /api/candidates/:id/range-data': { fields: { azDeg: '0', elDeg: '0', setName: 'Set A' }, numeric: ['azDeg', 'elDeg'] },
+  'POST /api/studies/:id/element-patterns': { fields: { name: 'Patch A' }, numeric: [] },
 };
 
 /** Bad query strings per GET route. */

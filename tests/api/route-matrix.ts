@@ -133,6 +133,13 @@ export const fixtures: Fixture[] = [
     )) as { id: string }[];
     return { benchCandidateId: candidate!.id, rangeUploadId: upload!.id };
   },
+  async function elementPatterns({ ctx, ids }) {
+    const [row] = (await ctx.db.query(
+      `INSERT INTO element_patterns (study_id, name, original_filename, raw, pattern) VALUES ($1, 'matrix', 'matrix.csv', $2, $3) RETURNING id`,
+      [ids.studyId, Buffer.from('azDeg,elDeg,gainDbi\n'), JSON.stringify({ azDeg: [-90, 90], elDeg: [-90, 90], gainDbi: [0, 0, 0, 0] })],
+    )) as { id: string }[];
+    return { elementPatternId: row!.id };
+  },
 ];
 
 const open = (status: number) => ({ anonymous: status, reviewer: status, engineer: status, admin: status, otherTeam: status });
@@ -297,4 +304,10 @@ export const matrix: MatrixRow[] = [
   { method: 'GET', path: '/api/range-data/:id', params: { id: 'rangeUploadId' }, ...member(200), otherTeam: 404 },
   { method: 'GET', path: '/api/range-data/:id/raw', params: { id: 'rangeUploadId' }, ...member(200), otherTeam: 404 },
   { method: 'DELETE', path: '/api/range-data/:id', params: { id: 'rangeUploadId' }, anonymous: 401, reviewer: 403, engineer: 204, admin: 204, otherTeam: 404 },
+  // element patterns (one stored 2 × 2 grid); a JSON body carries no file, so uploaders get the 400 naming it
+  { method: 'POST', path: '/api/studies/:id/element-patterns', params: { id: 'studyId' }, body: {}, anonymous: 401, reviewer: 403, engineer: 400, admin: 400, otherTeam: 404 },
+  { method: 'GET', path: '/api/studies/:id/element-patterns', params: { id: 'studyId' }, ...member(200), otherTeam: 404 },
+  { method: 'GET', path: '/api/element-patterns/:id', params: { id: 'elementPatternId' }, ...member(200), otherTeam: 404 },
+  { method: 'GET', path: '/api/element-patterns/:id/raw', params: { id: 'elementPatternId' }, ...member(200), otherTeam: 404 },
+  { method: 'DELETE', path: '/api/element-patterns/:id', params: { id: 'elementPatternId' }, anonymous: 401, reviewer: 403, engineer: 204, admin: 204, otherTeam: 404 },
 ];
