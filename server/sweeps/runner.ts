@@ -42,39 +42,44 @@ interface SweepGridInfo {
 }
 
 const POLL_SECONDS = 0.5;
+/** Grids kept per process: as many as each thread keeps compiled (workers/sweep.ts). */
+const GRID_CACHE_SIZE = 8;
 
-export async function startSweepRunner(o: RunnerOptions): Promise<SweepRunner> {
-  const workerId = `${os.hostname()}:${process.pid}:${randomBytes(3).toString('hex')}`;
-  const pool = createSweepPool({ threads: o.threads, filename: o.workerFile, onRetry: (err) => o.log.warn({ err }, 'sweep chunk retried after a worker thread failed') });
+/** A sweep's grid by id, fetched once and kept for the GRID_CACHE_SIZE most recent sweeps. */
+function sweepGridCache(db: DataSource): (sweepId: string) => Promise<SweepGridInfo> {
+  const grids = new Map<string, SweepGridInfo>();
+  return async (sweepId) => {
+    let g = grids.get(sweepId);
+    if (g) {
+      grids.delete(sweepId);
+    } else {
+      const [row] = (await db.query(`SELECT grid, constraints FROM sweeps WHERE id = $1`, [sweepId])) as SweepGridInfo[];
+      if (!row) throw new Error(`sweep ${sweepId} is gone`);
+      g = row;
+    }
+    grids.set(sweepId, g);
+    if (grids.size > GRID_CACHE_SIZE) grids.delete(grids.keys().next().value as string);
+    return g;
+  };
+}
 
-  // Liveness: a dedicated connection holding this worker's advisory lock for as long as we live.
+/** Registers the worker and takes its advisory lock on a dedicated connection, held for as long as it lives. */
+async function registerWorker(o: RunnerOptions, workerId: string, threads: number): Promise<pg.Client> {
   const [{ lock_key: lockKey }] = (await o.db.query(
     `INSERT INTO sweep_workers (id, host, pid, threads, embedded) VALUES ($1, $2, $3, $4, $5) RETURNING lock_key`,
-    [workerId, os.hostname(), process.pid, pool.threads, o.embedded],
+    [workerId, os.hostname(), process.pid, threads, o.embedded],
   )) as [{ lock_key: string }];
   const lockClient = new pg.Client({ connectionString: o.url });
   await lockClient.connect();
   lockClient.on('error', (err) => o.log.error({ err }, 'sweep worker lock connection lost'));
   await lockClient.query(`SELECT pg_advisory_lock($1)`, [lockKey]);
+  return lockClient;
+}
 
-  const boss = new PgBoss({ connectionString: o.url, max: 4, schedule: false, application_name: `lobewise-sweeps ${workerId}` });
-  boss.on('error', (err) => o.log.error({ err }, 'sweep queue error'));
-  await boss.start();
-  await boss.createQueue(SWEEP_QUEUE, { name: SWEEP_QUEUE, retryLimit: JOB_RETRY_LIMIT });
-
-  const grids = new Map<string, SweepGridInfo>();
-  const gridOf = async (sweepId: string): Promise<SweepGridInfo> => {
-    let g = grids.get(sweepId);
-    if (!g) {
-      const [row] = (await o.db.query(`SELECT grid, constraints FROM sweeps WHERE id = $1`, [sweepId])) as SweepGridInfo[];
-      if (!row) throw new Error(`sweep ${sweepId} is gone`);
-      g = row;
-      grids.set(sweepId, g);
-    }
-    return g;
-  };
-
-  const runChunk = async ({ sweepId, chunkIndex }: ChunkJob): Promise<void> => {
+/** Claims one chunk, runs it on the pool and writes its points; a failure releases the chunk or, past the retries, fails the sweep. */
+function chunkRunner(o: RunnerOptions, workerId: string, pool: SweepPool): (job: ChunkJob) => Promise<void> {
+  const gridOf = sweepGridCache(o.db);
+  return async ({ sweepId, chunkIndex }) => {
     // Claim: only a pending chunk of a live sweep that no live worker holds.
     const [claim] = (await o.db.query(
       `UPDATE sweep_chunks c SET claimed_by = $3, attempts = attempts + 1 FROM sweeps s
@@ -101,8 +106,20 @@ export async function startSweepRunner(o: RunnerOptions): Promise<SweepRunner> {
       );
     }
   };
+}
+
+export async function startSweepRunner(o: RunnerOptions): Promise<SweepRunner> {
+  const workerId = `${os.hostname()}:${process.pid}:${randomBytes(3).toString('hex')}`;
+  const pool = createSweepPool({ threads: o.threads, filename: o.workerFile, onRetry: (err) => o.log.warn({ err }, 'sweep chunk retried after a worker thread failed') });
+  const lockClient = await registerWorker(o, workerId, pool.threads);
+
+  const boss = new PgBoss({ connectionString: o.url, max: 4, schedule: false, application_name: `lobewise-sweeps ${workerId}` });
+  boss.on('error', (err) => o.log.error({ err }, 'sweep queue error'));
+  await boss.start();
+  await boss.createQueue(SWEEP_QUEUE, { name: SWEEP_QUEUE, retryLimit: JOB_RETRY_LIMIT });
 
   // One polling loop per thread plus one, so a thread has its next chunk while results are being written.
+  const runChunk = chunkRunner(o, workerId, pool);
   const workIds: string[] = [];
   for (let i = 0; i <= pool.threads; i++) {
     workIds.push(

@@ -86,30 +86,46 @@ export function countPoints(grid: SweepGridShape, constraints: SweepConstraints 
   return compileGrid(grid, constraints).points;
 }
 
-export function compileGrid(grid: SweepGridShape, constraints: SweepConstraints = {}): CompiledGrid {
+/** How a grid numbers its designs: value lists, which fields are geometry, and the kept geometry rows. */
+interface GridLayout {
+  values: Record<GridField, unknown[]>;
+  sizes: number[];
+  isGeo: boolean[];
+  /** freeAfter[i]: product of the sizes of the non-geometry fields after position i. */
+  freeAfter: number[];
+  /** Kept geometry combinations, G value indices per row, sorted in numbering order. */
+  kept: Uint32Array;
+  G: number;
+  keptCount: number;
+  designs: number;
+  anglesPerDesign: number;
+}
+
+function gridLayout(grid: SweepGridShape, constraints: SweepConstraints): GridLayout {
   const values = Object.fromEntries(
     [...DESIGN_FIELDS, ...STEER_FIELDS].map((f) => [f, valuesOf(grid, f)]),
   ) as Record<GridField, unknown[]>;
   const sizes = DESIGN_FIELDS.map((f) => values[f].length);
   const geoPositions = DESIGN_FIELDS.flatMap((f, i) => (GEOMETRY_FIELDS.has(f) ? [i] : []));
   const isGeo = DESIGN_FIELDS.map((f) => GEOMETRY_FIELDS.has(f));
-
-  // freeAfter[i]: product of the sizes of the non-geometry fields after position i.
   const freeAfter = new Array<number>(DESIGN_FIELDS.length + 1).fill(1);
   for (let i = DESIGN_FIELDS.length - 1; i >= 0; i--) {
     freeAfter[i] = freeAfter[i + 1]! * (i + 1 < DESIGN_FIELDS.length && !isGeo[i + 1] ? sizes[i + 1]! : 1);
   }
   const freeAll = freeAfter[0]! * (isGeo[0] ? 1 : sizes[0]!);
-
   const kept = keptGeometry(values, geoPositions.map((p) => DESIGN_FIELDS[p]!), constraints);
   const G = geoPositions.length;
   const keptCount = kept.length / G;
-  const nAz = values.steerAzDeg.length;
-  const nEl = values.steerElDeg.length;
-  const anglesPerDesign = nAz * nEl;
-  const designs = freeAll * keptCount;
-  const points = designs * anglesPerDesign;
+  return {
+    values, sizes, isGeo, freeAfter, kept, G, keptCount,
+    designs: freeAll * keptCount,
+    anglesPerDesign: values.steerAzDeg.length * values.steerElDeg.length,
+  };
+}
 
+/** Design number → value index per design field, by walking the blocks of the numbering (binary search in the geometry rows). */
+function designDigitsOf(l: GridLayout): (designIndex: number) => number[] {
+  const { kept, G, sizes, isGeo, freeAfter, keptCount, designs } = l;
   // First row in [lo, hi) whose geometry digit j is >= v (rows are sorted, earlier digits fixed).
   const lowerBound = (lo: number, hi: number, j: number, v: number) => {
     while (lo < hi) {
@@ -119,8 +135,7 @@ export function compileGrid(grid: SweepGridShape, constraints: SweepConstraints 
     }
     return lo;
   };
-
-  const designDigits = (designIndex: number): number[] => {
+  return (designIndex) => {
     if (!Number.isInteger(designIndex) || designIndex < 0 || designIndex >= designs) throw new RangeError('invalid designIndex');
     let k = designIndex;
     let lo = 0;
@@ -151,6 +166,14 @@ export function compileGrid(grid: SweepGridShape, constraints: SweepConstraints 
     }
     return digits;
   };
+}
+
+export function compileGrid(grid: SweepGridShape, constraints: SweepConstraints = {}): CompiledGrid {
+  const layout = gridLayout(grid, constraints);
+  const { values, designs, anglesPerDesign } = layout;
+  const points = designs * anglesPerDesign;
+  const nEl = values.steerElDeg.length;
+  const designDigits = designDigitsOf(layout);
 
   const pointAt = (index: number): GridPoint => {
     if (!Number.isInteger(index) || index < 0 || index >= points) throw new RangeError('invalid point index');
