@@ -25,8 +25,12 @@ const EnvSchema = z.object({
   SWEEP_RECOVERY_SECONDS: z.coerce.number().min(0.2).max(3600).default(5),
   /** Largest range-data or calibration file accepted (bytes). */
   UPLOAD_LIMIT_BYTES: z.coerce.number().int().min(1024).default(2_000_000),
-  /** Monte Carlo runs with more trials than this go to the worker pool. */
-  MONTE_CARLO_INLINE_TRIALS: z.coerce.number().int().min(1).default(200),
+  /** Monte Carlo runs with more trials than this are split over the request pool's threads (smaller: one task). */
+  MONTE_CARLO_SPLIT_TRIALS: z.coerce.number().int().min(1).default(200),
+  /** Largest work one request may ask for, in element·samples (see shared/compute/pattern-work.ts). */
+  REQUEST_WORK_BUDGET: z.coerce.number().min(1e5).max(1e12).default(5e8),
+  /** Heavy requests (evaluate, bench maths) one user may have running at once; more answer 429. */
+  HEAVY_REQUESTS_PER_USER: z.coerce.number().int().min(1).max(64).default(2),
   SMTP_URL: z.string().optional(),
   SMTP_FAKE_PORT: port.default(2525),
   MAIL_FROM: z.string().default('Lobewise <no-reply@lobewise.test>'),

@@ -3,6 +3,7 @@ import { Router, type Request, type RequestHandler } from 'express';
 import type { AppContext } from '../context.ts';
 import { singleUpload } from '../bench/upload.ts';
 import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts';
+import { heavyRequest, workSignal } from '../middleware/heavy-request.ts';
 import { validate } from '../middleware/validate.ts';
 import {
   calibrationFromFile,
@@ -41,12 +42,14 @@ const unlessFile =
 export function benchRouter(ctx: AppContext): Router {
   const router = Router();
   const upload = singleUpload(ctx.config.UPLOAD_LIMIT_BYTES);
+  // Bench maths runs on the worker pool: per-user cap, work budget, cancelled when the client leaves.
+  const heavy = heavyRequest(ctx);
 
-  router.post('/candidates/:id/codes', requireAuth, id, validate({ body: CodesRequestSchema }), async (req, res) => {
-    res.json(await codesFor(ctx, userOf(req), idOf(req), req.body as CodesRequest));
+  router.post('/candidates/:id/codes', requireAuth, heavy, id, validate({ body: CodesRequestSchema }), async (req, res) => {
+    res.json(await codesFor(ctx, userOf(req), idOf(req), req.body as CodesRequest, workSignal(req)));
   });
-  router.get('/candidates/:id/codes.csv', requireAuth, id, validate({ query: CodesCsvQuerySchema }), async (req, res) => {
-    const { csv, filename } = await codesCsvFor(ctx, userOf(req), idOf(req), req.query as unknown as CodesCsvQuery);
+  router.get('/candidates/:id/codes.csv', requireAuth, heavy, id, validate({ query: CodesCsvQuerySchema }), async (req, res) => {
+    const { csv, filename } = await codesCsvFor(ctx, userOf(req), idOf(req), req.query as unknown as CodesCsvQuery, workSignal(req));
     res.type('text/csv').attachment(filename).send(csv);
   });
   router.get('/candidates/:id/calibration', requireAuth, id, async (req, res) => {
@@ -56,14 +59,14 @@ export function benchRouter(ctx: AppContext): Router {
     const offsets = req.file ? calibrationFromFile(req.file.buffer) : (req.body as { offsets: Calibration }).offsets;
     res.json(await putCalibration(ctx, userOf(req), idOf(req), offsets, req.file?.originalname ?? null));
   });
-  router.post('/candidates/:id/manual-codes', requireAuth, id, validate({ body: ManualCodesRequestSchema }), async (req, res) => {
-    res.json(await manualCodes(ctx, userOf(req), idOf(req), req.body as ManualCodesRequest));
+  router.post('/candidates/:id/manual-codes', requireAuth, heavy, id, validate({ body: ManualCodesRequestSchema }), async (req, res) => {
+    res.json(await manualCodes(ctx, userOf(req), idOf(req), req.body as ManualCodesRequest, workSignal(req)));
   });
-  router.post('/candidates/:id/squint', requireAuth, id, validate({ body: SquintRequestSchema }), async (req, res) => {
-    res.json(await squintFor(ctx, userOf(req), idOf(req), req.body as SquintRequest));
+  router.post('/candidates/:id/squint', requireAuth, heavy, id, validate({ body: SquintRequestSchema }), async (req, res) => {
+    res.json(await squintFor(ctx, userOf(req), idOf(req), req.body as SquintRequest, workSignal(req)));
   });
-  router.post('/candidates/:id/monte-carlo', requireAuth, id, validate({ body: MonteCarloOptionsSchema }), async (req, res) => {
-    res.json(await monteCarloFor(ctx, userOf(req), idOf(req), req.body as MonteCarloOptions));
+  router.post('/candidates/:id/monte-carlo', requireAuth, heavy, id, validate({ body: MonteCarloOptionsSchema }), async (req, res) => {
+    res.json(await monteCarloFor(ctx, userOf(req), idOf(req), req.body as MonteCarloOptions, workSignal(req)));
   });
   return router;
 }

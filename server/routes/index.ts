@@ -12,6 +12,7 @@ import { outboxRouter } from './outbox.ts';
 import { sharesRouter } from './shares.ts';
 import { teamRouter } from './team.ts';
 import { candidatesRouter } from './candidates.ts';
+import { devicesRouter } from './devices.ts';
 import { studiesRouter } from './studies.ts';
 import { sweepsRouter } from './sweeps.ts';
 import { targetPresetsRouter } from './target-sheets.ts';
@@ -24,7 +25,7 @@ import { coverageRouter } from './coverage.ts';
 export function apiRouter(ctx: AppContext): Router {
   const api = Router();
   api.use('/health', healthRouter(ctx));
-  api.use('/evaluate', evaluateRouter());
+  api.use('/evaluate', evaluateRouter(ctx));
   api.use('/auth', authRouter(ctx));
   api.use('/me', meRouter(ctx));
   api.use('/account', accountRouter(ctx));
@@ -34,6 +35,7 @@ export function apiRouter(ctx: AppContext): Router {
   api.use('/studies/:studyId/shares', sharesRouter(ctx));
   api.use('/studies', studiesRouter(ctx));
   api.use('/candidates', candidatesRouter(ctx));
+  api.use('/devices', devicesRouter(ctx));
   api.use(sweepsRouter(ctx));
   api.use('/target-presets', targetPresetsRouter());
   api.use(reviewRouter(ctx));

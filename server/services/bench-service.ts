@@ -9,17 +9,20 @@ import { Candidate } from '../entities/candidate.ts';
 import { ApiError, invalidInput } from '../errors.ts';
 import { candidateFor } from './candidate-service.ts';
 import { runMonteCarlo } from '../bench/run-monte-carlo.ts';
+import { runRequestTask } from '../compute/request-pool.ts';
+import { checkWorkBudget } from '../middleware/heavy-request.ts';
+import { patternWork } from '../../shared/compute/pattern-work.ts';
 import type { CalibrationChoice, CodesCsvQuery, CodesRequest, ManualCodesRequest, SquintRequest } from '../../shared/bench/api-schemas.ts';
 import { BenchInputError } from '../../shared/bench/bench-input-error.ts';
 import { BeamListSchema, type Beam } from '../../shared/bench/beam.ts';
-import { beamSquint, type SquintResult } from '../../shared/bench/beam-squint.ts';
+import type { SquintResult } from '../../shared/bench/beam-squint.ts';
 import { squintBandRule } from '../../shared/bench/squint-band.ts';
 import { offsetArrays, type Calibration as Offsets } from '../../shared/bench/calibration.ts';
 import { codesCsv } from '../../shared/bench/codes-csv.ts';
-import { codesTable, type CodesTable } from '../../shared/bench/codes-table.ts';
+import type { CodesTable } from '../../shared/bench/codes-table.ts';
 import { DelimitedParseError } from '../../shared/bench/delimited-parse-error.ts';
 import { decodeText } from '../../shared/bench/decode-text.ts';
-import { manualCodesPattern, type ManualCodesResult } from '../../shared/bench/manual-codes.ts';
+import type { ManualCodesResult } from '../../shared/bench/manual-codes.ts';
 import type { MonteCarloOptions } from '../../shared/bench/monte-carlo-schema.ts';
 import type { MonteCarloSummary } from '../../shared/bench/monte-carlo-summary.ts';
 import { parseBeamRange } from '../../shared/bench/parse-beam-range.ts';
@@ -73,18 +76,30 @@ function beamsOf(input: string | Beam[]): Beam[] {
   return parsed.data;
 }
 
+/** Request-pool options: the configured thread count and the request's abort signal. */
+const pooled = (ctx: AppContext, signal?: AbortSignal) => ({ threads: ctx.config.SWEEP_THREADS, signal });
+
+/** The table on the worker pool, after the work-budget check (one pattern per beam). */
+function codesOnPool(ctx: AppContext, design: Design, beams: Beam[], calibration: Offsets | null, pointingThresholdDeg: number | null, signal?: AbortSignal): Promise<CodesTable> {
+  checkWorkBudget(ctx, patternWork(design, beams.length), 'beams');
+  return runRequestTask<CodesTable>({ kind: 'codes', design, beams, calibration, pointingThresholdDeg }, pooled(ctx, signal));
+}
+
 /** The bench-codes table for a beam list (POST body). */
-export async function codesFor(ctx: AppContext, user: AuthUser, id: string, req: CodesRequest): Promise<CodesTable> {
+export async function codesFor(ctx: AppContext, user: AuthUser, id: string, req: CodesRequest, signal?: AbortSignal): Promise<CodesTable> {
   const candidate = await candidateFor(ctx, user, id, 'read');
   const calibration = await offsetsFor(ctx, id, req.calibration);
-  return benchCall(() => codesTable(designOf(candidate), beamsOf(req.beams), { calibration, pointingThresholdDeg: req.pointingThresholdDeg }));
+  const design = designOf(candidate);
+  const table = await codesOnPool(ctx, design, benchCall(() => beamsOf(req.beams)), calibration, req.pointingThresholdDeg ?? null, signal);
+  return { ...table, header: { ...table.header, candidate: candidate.name } };
 }
 
 /** The same table as CSV, with a file name for the download. */
-export async function codesCsvFor(ctx: AppContext, user: AuthUser, id: string, q: CodesCsvQuery): Promise<{ csv: string; filename: string }> {
+export async function codesCsvFor(ctx: AppContext, user: AuthUser, id: string, q: CodesCsvQuery, signal?: AbortSignal): Promise<{ csv: string; filename: string }> {
   const candidate = await candidateFor(ctx, user, id, 'read');
   const calibration = await offsetsFor(ctx, id, q.calibration);
-  const table = benchCall(() => codesTable(designOf(candidate), beamsOf(q.beams), { calibration, pointingThresholdDeg: q.threshold ?? null }));
+  const pooled = await codesOnPool(ctx, designOf(candidate), benchCall(() => beamsOf(q.beams)), calibration, q.threshold ?? null, signal);
+  const table = { ...pooled, header: { ...pooled.header, candidate: candidate.name } };
   const safe = candidate.name.replace(/[^A-Za-z0-9._-]+/g, '-').replace(/^-+|-+$/g, '') || 'candidate';
   return { csv: codesCsv(table), filename: `${safe}-bench-codes.csv` };
 }
@@ -123,13 +138,15 @@ export async function putCalibration(ctx: AppContext, user: AuthUser, id: string
 }
 
 /** Codes typed for one beam: the pattern and where the beam really points. */
-export async function manualCodes(ctx: AppContext, user: AuthUser, id: string, req: ManualCodesRequest): Promise<ManualCodesResult> {
+export async function manualCodes(ctx: AppContext, user: AuthUser, id: string, req: ManualCodesRequest, signal?: AbortSignal): Promise<ManualCodesResult> {
   const candidate = await candidateFor(ctx, user, id, 'read');
   const calibration = await offsetsFor(ctx, id, req.calibration);
-  return benchCall(() => manualCodesPattern(designOf(candidate), req.codes, calibration));
+  const design = designOf(candidate);
+  checkWorkBudget(ctx, patternWork(design), 'codes');
+  return runRequestTask<ManualCodesResult>({ kind: 'manual-codes', design, codes: req.codes, calibration }, pooled(ctx, signal));
 }
 
-export async function squintFor(ctx: AppContext, user: AuthUser, id: string, req: SquintRequest): Promise<SquintResult & { band: { id: string | null; lowGHz: number; highGHz: number; source: string | null } }> {
+export async function squintFor(ctx: AppContext, user: AuthUser, id: string, req: SquintRequest, signal?: AbortSignal): Promise<SquintResult & { band: { id: string | null; lowGHz: number; highGHz: number; source: string | null } }> {
   const candidate = await candidateFor(ctx, user, id, 'read');
   const preset = typeof req.band === 'string' ? BANDS.find((b) => b.id === req.band) : null;
   if (typeof req.band === 'string' && !preset) throw invalidInput([{ field: 'band', message: `must be one of ${BANDS.map((b) => b.id).join(', ')} or {lowGHz, highGHz}` }]);
@@ -139,20 +156,17 @@ export async function squintFor(ctx: AppContext, user: AuthUser, id: string, req
   const outside = squintBandRule(band, design.frequencyGHz);
   if (outside) throw invalidInput([{ field: 'band', message: outside }]);
   const calibration = await offsetsFor(ctx, id, req.calibration);
-  return benchCall(() => {
-    const offsets = calibration ? offsetArrays(calibration, channelCount(design.grouping, design.nx, design.ny)) : undefined;
-    return { ...beamSquint(design, req.beam, { ...band, points: req.points }, offsets), band };
-  });
+  // Checked here so a calibration that does not fit answers 400 before any thread starts.
+  if (calibration) benchCall(() => offsetArrays(calibration, channelCount(design.grouping, design.nx, design.ny)));
+  checkWorkBudget(ctx, patternWork(design, req.points + 1), 'points');
+  const result = await runRequestTask<SquintResult>({ kind: 'squint', design, beam: req.beam, band: { lowGHz: band.lowGHz, highGHz: band.highGHz, points: req.points }, calibration }, pooled(ctx, signal));
+  return { ...result, band };
 }
 
-/** Monte Carlo of channel errors; large runs go to the worker pool. */
-export async function monteCarloFor(ctx: AppContext, user: AuthUser, id: string, options: MonteCarloOptions): Promise<MonteCarloSummary> {
+/** Monte Carlo of channel errors on the worker pool (one pattern per trial plus the ideal beam). */
+export async function monteCarloFor(ctx: AppContext, user: AuthUser, id: string, options: MonteCarloOptions, signal?: AbortSignal): Promise<MonteCarloSummary> {
   const candidate = await candidateFor(ctx, user, id, 'read');
   const design = designOf(candidate);
-  try {
-    return await runMonteCarlo(design, options, { inlineTrials: ctx.config.MONTE_CARLO_INLINE_TRIALS, threads: ctx.config.SWEEP_THREADS });
-  } catch (err) {
-    if (err instanceof BenchInputError) throw invalidInput([{ field: err.field, message: err.rule }]);
-    throw err;
-  }
+  checkWorkBudget(ctx, patternWork(design, options.trials + 1), 'trials');
+  return runMonteCarlo(design, options, { splitTrials: ctx.config.MONTE_CARLO_SPLIT_TRIALS, ...pooled(ctx, signal) });
 }

@@ -31,7 +31,7 @@ export interface SweepPool {
 }
 
 /** The parent's flags minus the inspector; a bundled worker needs no TypeScript loader. */
-function workerExecArgv(bundled: boolean): string[] {
+export function workerExecArgv(bundled: boolean): string[] {
   const argv = process.execArgv.filter((a) => !a.startsWith('--inspect'));
   if (!bundled) return argv.some((a) => a.includes('tsx')) ? argv : [...argv, '--import', 'tsx'];
   const out: string[] = [];
@@ -58,32 +58,37 @@ function unchanged(manifest: BundleManifest): boolean {
   });
 }
 
-let bundled: string | null | undefined;
+const bundles = new Map<string, string | null>();
 
-/** Path of the bundled default worker, or null when esbuild is not available (then threads use tsx). */
-export function bundledWorkerFile(): string | null {
-  if (bundled !== undefined) return bundled;
-  bundled = null;
+/** Path of the bundled worker (the sweep worker unless `entry` says), or null when esbuild is not available (then threads use tsx). */
+export function bundledWorkerFile(entry: string = DEFAULT_WORKER_FILE): string | null {
+  const known = bundles.get(entry);
+  if (known !== undefined) return known;
+  bundles.set(entry, null);
+  const done = (file: string | null) => {
+    bundles.set(entry, file);
+    return file;
+  };
   let esbuild: typeof import('esbuild');
   try {
     esbuild = createRequire(import.meta.url)('esbuild') as typeof import('esbuild');
   } catch {
-    return bundled;
+    return null;
   }
   const dir = path.join(os.tmpdir(), 'lobewise-sweep-worker');
-  const stem = path.join(dir, createHash('sha1').update(DEFAULT_WORKER_FILE).update(esbuild.version).digest('hex').slice(0, 16));
+  const stem = path.join(dir, createHash('sha1').update(entry).update(esbuild.version).digest('hex').slice(0, 16));
   const file = `${stem}.mjs`;
   try {
     const manifest = JSON.parse(readFileSync(`${stem}.json`, 'utf8')) as BundleManifest;
     statSync(file);
-    if (unchanged(manifest)) return (bundled = file);
+    if (unchanged(manifest)) return done(file);
   } catch {
     /* no usable cache: build below */
   }
   try {
-    const root = path.resolve(path.dirname(DEFAULT_WORKER_FILE), '..');
+    const root = path.resolve(path.dirname(entry), '..');
     const result = esbuild.buildSync({
-      entryPoints: [DEFAULT_WORKER_FILE], bundle: true, format: 'esm', platform: 'node', target: 'node20',
+      entryPoints: [entry], bundle: true, format: 'esm', platform: 'node', target: 'node20',
       write: false, metafile: true, logLevel: 'silent', absWorkingDir: root,
     });
     const inputs = Object.keys(result.metafile.inputs).map((f): BundleManifest['inputs'][number] => {
@@ -98,11 +103,10 @@ export function bundledWorkerFile(): string | null {
     renameSync(tmp, file);
     writeFileSync(`${tmp}.json`, JSON.stringify({ inputs } satisfies BundleManifest));
     renameSync(`${tmp}.json`, `${stem}.json`);
-    bundled = file;
+    return done(file);
   } catch {
-    bundled = null;
+    return done(null);
   }
-  return bundled;
 }
 
 export function defaultThreads(): number {

@@ -92,7 +92,9 @@ export const fixtures: Fixture[] = [
       [ids.studyId, JSON.stringify({ frequencyGHz: 28, nx: 4, ny: 1, dxMm: 5, dyMm: 5 })],
     );
     const [sheet] = (await ctx.db.query(`INSERT INTO target_sheets (study_id, sheet) VALUES ($1, '{"name":"matrix"}') RETURNING id`, [ids.studyId])) as { id: string }[];
-    return { candidateId: rows[0]!.id, sheetId: sheet!.id };
+    const layout = { outline: { widthMm: 72, heightMm: 150, depthMm: 8 }, modules: [{ candidateId: rows[0]!.id, face: 'front', u: 0.5, v: 0.5, codebook: { kind: 'grid', grid: 'az 0 × el 0' } }] };
+    const [device] = (await ctx.db.query(`INSERT INTO devices (study_id, name, layout) VALUES ($1, 'matrix', $2) RETURNING id`, [ids.studyId, JSON.stringify(layout)])) as { id: string }[];
+    return { candidateId: rows[0]!.id, sheetId: sheet!.id, deviceId: device!.id };
   },
   async function sweeps({ ctx, ids }) {
     const insert = async (status: string) =>
@@ -248,6 +250,11 @@ export const matrix: MatrixRow[] = [
   { method: 'GET', path: '/api/studies/:id/target-sheets/:sheetId', params: { id: 'studyId' }, ...member(200), otherTeam: 404 },
   { method: 'PUT', path: '/api/studies/:id/target-sheets/:sheetId', params: { id: 'studyId' }, body: { preset: null, sheet: { name: 'Renamed' } }, anonymous: 401, reviewer: 403, engineer: 200, admin: 200, otherTeam: 404 },
   { method: 'DELETE', path: '/api/studies/:id/target-sheets/:sheetId', params: { id: 'studyId' }, anonymous: 401, reviewer: 403, engineer: 204, admin: 204, otherTeam: 404 },
+  { method: 'GET', path: '/api/studies/:id/devices', params: { id: 'studyId' }, ...member(200), otherTeam: 404 },
+  { method: 'POST', path: '/api/studies/:id/devices', params: { id: 'studyId' }, body: {}, anonymous: 401, reviewer: 403, engineer: 400, admin: 400, otherTeam: 404 },
+  { method: 'GET', path: '/api/devices/:id', params: { id: 'deviceId' }, ...member(200), otherTeam: 404 },
+  { method: 'PATCH', path: '/api/devices/:id', params: { id: 'deviceId' }, body: { name: 'Renamed' }, anonymous: 401, reviewer: 403, engineer: 200, admin: 200, otherTeam: 404 },
+  { method: 'DELETE', path: '/api/devices/:id', params: { id: 'deviceId' }, anonymous: 401, reviewer: 403, engineer: 204, admin: 204, otherTeam: 404 },
   { method: 'GET', path: '/api/candidates/:id', params: { id: 'candidateId' }, ...member(200), otherTeam: 404 },
   { method: 'PATCH', path: '/api/candidates/:id', params: { id: 'candidateId' }, body: {}, anonymous: 401, reviewer: 403, engineer: 200, admin: 200, otherTeam: 404 },
   { method: 'DELETE', path: '/api/candidates/:id', params: { id: 'candidateId' }, anonymous: 401, reviewer: 403, engineer: 204, admin: 204, otherTeam: 404 },
