@@ -14,6 +14,7 @@ import { Calibration } from './calibration.ts';
 import { RangeUpload } from './range-upload.ts';
 import { StudyCostModel } from './cost-model.ts';
 import { ElementPatternRow } from './element-pattern.ts';
+import { Device } from './device.ts';
 
 export { Study, StudyShare, Team, User };
-export const entities = [Team, User, Study, StudyShare, ...accountEntities, Candidate, TargetSheetRow, Comment, ReviewRequest, Decision, Sweep, Calibration, RangeUpload, StudyCostModel, ElementPatternRow];
+export const entities = [Team, User, Study, StudyShare, ...accountEntities, Candidate, TargetSheetRow, Comment, ReviewRequest, Decision, Sweep, Calibration, RangeUpload, StudyCostModel, ElementPatternRow, Device];

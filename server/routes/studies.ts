@@ -27,6 +27,7 @@ import {
   type StudyPatch,
 } from '../../shared/schemas/study.ts';
 import { studyCandidatesRouter } from './candidates.ts';
+import { studyDevicesRouter } from './devices.ts';
 import { studyCostModelRouter } from './cost-model.ts';
 import { studyTargetSheetRouter, studyTargetSheetsRouter } from './target-sheets.ts';
 
@@ -71,5 +72,6 @@ export function studiesRouter(ctx: AppContext): Router {
   router.use('/:id/cost-model', studyCostModelRouter(ctx));
   router.use('/:id/target-sheet', studyTargetSheetRouter(ctx));
   router.use('/:id/target-sheets', studyTargetSheetsRouter(ctx));
+  router.use('/:id/devices', studyDevicesRouter(ctx));
   return router;
 }

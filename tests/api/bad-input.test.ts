@@ -43,6 +43,15 @@ interface BodySpec {
   allowUnknown?: boolean;
 }
 
+/** A device layout on the fixture candidate: one grid module and one fill module. */
+const DEVICE_LAYOUT = (ids: Record<string, string>) => ({
+  outline: { widthMm: 72, heightMm: 150, depthMm: 8 },
+  modules: [
+    { candidateId: ids.candidateId, face: 'right', u: 0.5, v: 0.7, codebook: { kind: 'grid', grid: 'az -45:45:15 × el 0' } },
+    { candidateId: ids.candidateId, face: 'left', u: 0.5, v: 0.3, codebook: { kind: 'fill', crossoverDb: 3, azMinDeg: -60, azMaxDeg: 60, elMinDeg: -30, elMaxDeg: 30 } },
+  ],
+});
+
 /** A valid body per state-changing route; every leaf is then spoiled one at a time. */
 const BODIES: Record<string, BodySpec> = {
   'POST /api/evaluate': { body: () => ({ ...DESIGN }) },
@@ -86,6 +95,11 @@ const BODIES: Record<string, BodySpec> = {
     }),
     allowEmpty: ['sheet.name'],
   },
+  'POST /api/studies/:id/devices': {
+    body: (ids) => ({ name: 'Phone', notes: 'n', targetSheetId: ids.sheetId, layout: DEVICE_LAYOUT(ids) }),
+    allowEmpty: ['notes'],
+  },
+  'PATCH /api/devices/:id': { body: (ids) => ({ name: 'Phone 2', notes: 'n', layout: DEVICE_LAYOUT(ids) }), allowEmpty: ['notes'] },
   'POST /api/studies/:id/target-sheets': {
     body: () => ({ preset: null, sheet: { name: 'Small cell', minSectorEirpDbm: 43, serviceSector: { azMinDeg: -50, azMaxDeg: 50, elMinDeg: -10, elMaxDeg: 10 } } }),
   },
@@ -292,6 +306,7 @@ let tables: string[] = [];
 const RESOURCE_ID: Record<string, string> = {
   studies: 'studyId',
   candidates: 'candidateId',
+  devices: 'deviceId',
   sweeps: 'sweepId',
   comments: 'commentId',
   decisions: 'decisionId',
@@ -324,6 +339,7 @@ async function makeResources(): Promise<void> {
   const study = ids.studyId!;
   // A candidate with phase bits, so the bench routes (codes, range data) accept it.
   ids.candidateId = (await must(await as('engineer').post(`/api/studies/${study}/candidates`).send({ name: 'fixture', design: DESIGN }), 'candidate')).id!;
+  ids.deviceId = (await must(await as('engineer').post(`/api/studies/${study}/devices`).send({ name: 'fixture', layout: DEVICE_LAYOUT(ids) }), 'device')).id!;
   ids.sheetId = (await must(await as('engineer').post(`/api/studies/${study}/target-sheets`).send({ preset: null, sheet: { name: 'fixture' } }), 'target sheet')).id!;
   ids.sweepId = (await must(await as('engineer').post(`/api/studies/${study}/sweeps`).send({ name: 'fixture', grid: { frequencyGHz: 28, nx: 4, dxMm: 5.35 } }), 'sweep')).id!;
   ids.commentId = (await must(await as('engineer').post(`/api/studies/${study}/comments`).send({ body: 'fixture' }), 'comment')).id!;

@@ -1,0 +1,5 @@
+/** Devices: modules placed on a device's faces, their codebooks, and the coverage judged against a sheet. */
+export { deviceCoverage, DeviceCoverageError, DEVICE_PERCENTILES, type DeviceCoverageInput, type DeviceCoverageResult } from './device-coverage.ts';
+export { deviceFigures } from './device-figures.ts';
+export { deviceRegion } from './device-region.ts';
+export { moduleBeams, type ModuleBeams } from './module-beams.ts';
