@@ -1,5 +1,6 @@
 import type { CoverageModule } from '../schemas/coverage.ts';
-import { gainModel } from '../engine/index.ts';
+import { elementPower, gainModel } from '../engine/index.ts';
+import type { ElementPower } from '../engine/element/element-power.ts';
 import { deviceDirection } from './device-direction.ts';
 import { moduleAngles, type ModuleAngles } from './module-angles.ts';
 import { moduleFrame, type ModuleFrame } from './module-frame.ts';
@@ -15,6 +16,8 @@ export interface PlacedModule {
   conductedPowerDbm: number;
   /** Linear power gain of each beam of the codebook at module-frame (az, el) in radians. */
   beams: ((azRad: number, elRad: number) => number)[];
+  /** The element pattern: where it is 0 every beam's gain is 0 (G = G_e·|AF|²/Σa²), so the beams are skipped. */
+  element: ElementPower;
 }
 
 export interface DeviceEirp {
@@ -32,7 +35,7 @@ export function deviceEirp(modules: readonly CoverageModule[]): DeviceEirp {
     const beams = m.beams.map((b) => gainModel({ ...m.design, steerAzDeg: b.azDeg, steerElDeg: b.elDeg, codes: null }));
     const power = beams[0]?.conductedPowerDbm;
     if (power === null || power === undefined) throw new RangeError('module without channel power');
-    return { frame: moduleFrame(m.orientation), conductedPowerDbm: power, beams: beams.map((g) => g.gainAt) };
+    return { frame: moduleFrame(m.orientation), conductedPowerDbm: power, beams: beams.map((g) => g.gainAt), element: elementPower(m.design.element) };
   });
   const powerMw = placed.map((p) => 10 ** (p.conductedPowerDbm / 10));
   const angles: ModuleAngles = { azRad: 0, elRad: 0 };
@@ -44,6 +47,7 @@ export function deviceEirp(modules: readonly CoverageModule[]): DeviceEirp {
     for (let i = 0; i < placed.length; i++) {
       const p = placed[i]!;
       moduleAngles(p.frame, d, angles);
+      if (p.element(angles.azRad, angles.elRad) === 0) continue;
       const mw = powerMw[i]!;
       for (let k = 0; k < p.beams.length; k++) {
         const e = mw * p.beams[k]!(angles.azRad, angles.elRad);

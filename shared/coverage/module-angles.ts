@@ -28,3 +28,9 @@ export function deviceVectorOf(frame: ModuleFrame, azRad: number, elRad: number)
   const f = (i: 0 | 1 | 2) => u * frame.x[i] + v * frame.y[i] + w * frame.z[i];
   return [f(0), f(1), f(2)];
 }
+
+/** Device-frame (az, el) in radians of module-frame direction (az_m, el_m). */
+export function deviceAngles(frame: ModuleFrame, azRad: number, elRad: number): { azRad: number; elRad: number } {
+  const d = deviceVectorOf(frame, azRad, elRad);
+  return { azRad: Math.atan2(d[0], d[2]), elRad: Math.asin(Math.max(-1, Math.min(1, d[1]))) };
+}
