@@ -8,6 +8,8 @@ import { benchModel } from './bench-model.ts';
 import { offsetArrays, type Calibration, type OffsetArrays } from './calibration.ts';
 import { beamWarnings, type BenchWarning } from './beam-warnings.ts';
 import { beamFigures, type BeamFigures } from '../engine/beam-figures.ts';
+import { attenuatorCodes } from '../engine/gain/channel-amplitudes.ts';
+import { channelOfElement } from './bench-model.ts';
 
 export interface CodesRow {
   azDeg: number;
@@ -23,7 +25,27 @@ export interface CodesRow {
   warnings: BenchWarning[];
 }
 
+/** What the bench needs to load the codes right: which candidate, at what frequency, with which step sizes. */
+export interface CodesHeader {
+  /** The candidate's name (filled by the caller that knows it), or null. */
+  candidate: string | null;
+  frequencyGHz: number;
+  phaseBits: number;
+  phaseStepDeg: number;
+  /** Null when the design has continuous amplitude (no attenuator). */
+  attenuatorBits: number | null;
+  attenuatorStepDb: number | null;
+  grouping: Design['grouping'];
+  nx: number;
+  ny: number;
+}
+
 export interface CodesTable {
+  header: CodesHeader;
+  /** Attenuator code per channel (the taper, quantised; the same for every beam), or null without an attenuator. */
+  attenuation: number[] | null;
+  /** The elements each channel feeds, as [m, n] (column, row from the -x/-y corner), channel order as the codes. */
+  channelElements: [number, number][][];
   channels: number;
   phaseBits: number;
   calibrated: boolean;
@@ -43,12 +65,13 @@ export function predictCodes(design: Design, codes: readonly number[], offsets: 
 /**
  * Bench codes: the phase code of every channel for each beam, with the predicted peak, pointing error,
  * HPBW and warnings. With calibration, the codes compensate the measured phase offsets and the
- * prediction includes both the gain and the (residual) phase offsets.
+ * prediction includes both the gain and the (residual) phase offsets. The header names the candidate, frequency
+ * and step sizes; with an attenuator each channel's attenuation code sits beside the phase codes.
  */
 export function codesTable(
   design: Design,
   beams: readonly Beam[],
-  options: { calibration?: Calibration | null; pointingThresholdDeg?: number | null } = {},
+  options: { calibration?: Calibration | null; pointingThresholdDeg?: number | null; candidate?: string | null } = {},
 ): CodesTable {
   const channels = channelCount(design.grouping, design.nx, design.ny);
   const calibrated = (options.calibration?.length ?? 0) > 0;
@@ -71,5 +94,19 @@ export function codesTable(
       warnings: beamWarnings(p, threshold),
     };
   });
-  return { channels, phaseBits: design.phaseBits ?? 0, calibrated, pointingThresholdDeg: threshold, rows };
+  const phaseBits = design.phaseBits ?? 0;
+  const channelElements: [number, number][][] = Array.from({ length: channels }, () => []);
+  for (let n = 0; n < design.ny; n++) for (let m = 0; m < design.nx; m++) channelElements[channelOfElement(design, m, n)]!.push([m, n]);
+  const header: CodesHeader = {
+    candidate: options.candidate ?? null,
+    frequencyGHz: design.frequencyGHz,
+    phaseBits,
+    phaseStepDeg: phaseBits > 0 ? 360 / 2 ** phaseBits : 0,
+    attenuatorBits: design.attenuatorBits ?? null,
+    attenuatorStepDb: design.attenuatorStepDb ?? null,
+    grouping: design.grouping,
+    nx: design.nx,
+    ny: design.ny,
+  };
+  return { header, attenuation: attenuatorCodes(design), channelElements, channels, phaseBits, calibrated, pointingThresholdDeg: threshold, rows };
 }

@@ -30,4 +30,15 @@ describe('CodesTable.vue', () => {
     expect(rows[0]!.find('.warnings').text()).toContain('pointing-error');
     expect(w.find('.summary').text()).toContain('2 with warnings');
   });
+
+  it('shows an attenuation code per channel beside the phase codes and names the steps above the table', () => {
+    // Hamming(4) peak-normalised ends are 0.1039 → 19.67 dB → 39 codes of 0.5 dB (scipy.signal.windows.hamming values).
+    const d = DesignSchema.parse({ ...design, taperX: { kind: 'hamming' }, attenuatorStepDb: 0.5, attenuatorBits: 6 });
+    const w = mount(CodesTable, { props: { table: codesTable(d, parseBeamRange('0:0:1'), { candidate: 'Four column' }) }, global: { plugins: [Antd] } });
+    expect(w.findAll('thead th.att').map((t) => t.text())).toEqual(['att ch1', 'att ch2', 'att ch3', 'att ch4']);
+    expect(w.findAll('tbody tr')[0]!.findAll('td.att').map((c) => c.text())).toEqual(['39', '0', '0', '39']);
+    expect(w.find('.header-block').text()).toContain('Four column');
+    expect(w.find('.header-block').text()).toContain('attenuator 6 bits, 0.5 dB per code');
+    expect(w.find('.channel-map').text()).toContain('ch3: (2, 0)');
+  });
 });

@@ -11,7 +11,7 @@ describe('cli codes', () => {
   it('prints the CSV for a START:STOP:STEP azimuth range, with the worked-example codes at -30°', () => {
     const r = cli('--candidate', `${FIXTURES}/handset-4col.json`, '--beams', '-30:30:30');
     expect(r.status).toBe(0);
-    const lines = r.stdout.trim().split('\n');
+    const lines = r.stdout.trim().split('\n').filter((l) => !l.startsWith('#'));
     expect(lines[0]).toBe('azDeg,elDeg,ch1,ch2,ch3,ch4,peakAzDeg,peakElDeg,pointingErrorDeg,hpbwAzDeg,hpbwElDeg,warnings');
     expect(lines.slice(1).map((l) => l.split(',').slice(0, 6).join(','))).toEqual(['-30,0,0,49,34,19', '0,0,0,0,0,0', '30,0,0,15,30,45']);
   });
@@ -19,7 +19,7 @@ describe('cli codes', () => {
   it('reads a JSON beam list (elDeg defaults to 0) and a calibration CSV, and flags beams over the threshold', () => {
     const r = cli('--candidate', `${FIXTURES}/handset-4col.json`, '--beams', `${FIXTURES}/beams.json`, '--calibration', `${FIXTURES}/calibration-4col.csv`, '--threshold', '2');
     expect(r.status).toBe(0);
-    const rows = r.stdout.trim().split('\n').slice(1);
+    const rows = r.stdout.trim().split('\n').filter((l) => !l.startsWith('#')).slice(1);
     expect(rows).toHaveLength(3);
     // Channel 2 adds 12.5° itself: the +30° code moves from 15 toward 15 + 12.5/5.625 ≈ 17.
     expect(rows[2]!.split(',')[3]).toBe('17');

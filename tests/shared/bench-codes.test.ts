@@ -119,12 +119,37 @@ describe('codesTable(design, beams, options)', () => {
 describe('codesCsv(table)', () => {
   it('writes the azDeg,elDeg,ch1..chN header, then one row per beam with the codes', () => {
     const t = codesTable(design(), parseBeamRange('-30:30:30'));
-    const lines = codesCsv(t).trim().split('\n');
+    // The '#' header block comes first; the table follows it.
+    const lines = codesCsv(t).trim().split('\n').filter((l) => !l.startsWith('#'));
     expect(lines[0]).toBe('azDeg,elDeg,ch1,ch2,ch3,ch4,peakAzDeg,peakElDeg,pointingErrorDeg,hpbwAzDeg,hpbwElDeg,warnings');
     expect(lines).toHaveLength(4);
     expect(lines[1]!.split(',').slice(0, 6)).toEqual(['-30', '0', '0', '49', '34', '19']);
     expect(lines[3]!.split(',').slice(0, 6)).toEqual(['30', '0', '0', '15', '30', '45']);
     expect(lines[3]!.split(',')).toHaveLength(12);
+  });
+});
+
+describe('codesCsv(table): header block, attenuation codes and channel map', () => {
+  it('names candidate, frequency and steps, and lists which elements each column channel feeds', () => {
+    const t = codesTable(design({ ny: 2 }), parseBeamRange('0:0:1'), { candidate: 'Four column' });
+    const head = codesCsv(t).split('\n').filter((l) => l.startsWith('#'));
+    expect(head).toContain('# candidate: Four column');
+    expect(head).toContain('# frequencyGHz: 28');
+    // 6 bits: 360/64 = 5.625° per code.
+    expect(head).toContain('# phase: 6 bits; 5.625 deg per code');
+    expect(head).toContain('# attenuator: none (continuous amplitude)');
+    expect(head).toContain('# ch2 feeds (m n): (1 0) (1 1)');
+    expect(t.channelElements).toHaveLength(4);
+  });
+  it('puts one attenuation code per channel beside the phase codes (hamming(4) at 0.5 dB steps: 39, 0, 0, 39)', () => {
+    // Hamming(4) = 0.08, 0.77, 0.77, 0.08 (scipy.signal.windows.hamming(4)); peak-normalised 0.1039, 1, 1, 0.1039:
+    // -20·log10(0.1039) = 19.67 dB → round(19.67/0.5) = 39 codes; 1 → 0.
+    const t = codesTable(design({ taperX: { kind: 'hamming' }, attenuatorStepDb: 0.5, attenuatorBits: 6 }), parseBeamRange('-30:30:30'));
+    expect(t.attenuation).toEqual([39, 0, 0, 39]);
+    const lines = codesCsv(t).trim().split('\n').filter((l) => !l.startsWith('#'));
+    expect(lines[0]).toBe('azDeg,elDeg,ch1,ch2,ch3,ch4,attCh1,attCh2,attCh3,attCh4,peakAzDeg,peakElDeg,pointingErrorDeg,hpbwAzDeg,hpbwElDeg,warnings');
+    expect(lines[1]!.split(',').slice(0, 10)).toEqual(['-30', '0', '0', '49', '34', '19', '39', '0', '0', '39']);
+    expect(codesCsv(t)).toContain('# attenuator: 6 bits; 0.5 dB per code (code 0 = full amplitude)');
   });
 });
 

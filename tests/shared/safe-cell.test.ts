@@ -23,10 +23,15 @@ describe('bench codes CSV', () => {
   it('writes no cell that opens as a formula, whatever text reaches a row', () => {
     // The table's text today is warning codes; a row with hostile text stands for any text added later.
     const csv = codesCsv({
+      header: { candidate: '=HYPERLINK("x")', frequencyGHz: 28, phaseBits: 6, phaseStepDeg: 5.625, attenuatorBits: null, attenuatorStepDb: null, grouping: 'element', nx: 1, ny: 1 },
+      attenuation: null, channelElements: [[[0, 0]]],
       channels: 1, phaseBits: 6, calibrated: false, pointingThresholdDeg: null,
       rows: [{ azDeg: -30, elDeg: 0, codes: [49], peakAzDeg: -29.5, peakElDeg: 0, pointingErrorDeg: 0.5, hpbwAzDeg: 20, hpbwElDeg: 90, sllAzDb: null, sllElDb: null, warnings: [{ code: '=cmd|/c calc', message: 'x' }] as never }],
     });
-    const cells = csv.trim().split('\n')[1]!.split(',');
+    const lines = csv.trim().split('\n');
+    // The header block's lines are comments that start with '#', so a hostile candidate name stays text there too.
+    expect(lines.filter((l) => l.startsWith('#')).every((l) => !/^[=+\-@]/.test(l))).toBe(true);
+    const cells = lines.filter((l) => !l.startsWith('#'))[1]!.split(',');
     expect(cells[0]).toBe('-30'); // numbers stay numbers
     expect(cells.at(-1)).toBe("'=cmd|/c calc");
   });

@@ -5,6 +5,7 @@
  * Bad input: UsageError, so exit 2 with one "field: rule" line.
  */
 import { existsSync, readFileSync } from 'node:fs';
+import { basename } from 'node:path';
 import { parseArgs } from 'node:util';
 import { BenchInputError } from '../../../shared/bench/bench-input-error.ts';
 import { BeamListSchema, type Beam } from '../../../shared/bench/beam.ts';
@@ -27,13 +28,15 @@ function readJson(path: string, field: string): unknown {
   }
 }
 
-function readDesign(path: string): Design {
+function readDesign(path: string): { design: Design; name: string } {
   const raw = readJson(path, 'candidate');
   // A saved candidate carries its design in a field; a bare design is the engine's own JSON.
   const body = raw !== null && typeof raw === 'object' && 'design' in raw ? (raw as { design: unknown }).design : raw;
   const parsed = DesignSchema.safeParse(body);
   if (!parsed.success) throw new UsageError(`candidate.${formatIssue(parsed.error)}`);
-  return parsed.data;
+  // The header names the saved candidate, or the file for a bare design.
+  const named = raw !== null && typeof raw === 'object' && typeof (raw as { name?: unknown }).name === 'string' ? (raw as { name: string }).name : null;
+  return { design: parsed.data, name: named ?? basename(path).replace(/\.json$/i, '') };
 }
 
 function readBeams(spec: string): Beam[] {
@@ -103,9 +106,9 @@ function run(argv: string[]): number {
   if (!values.beams) throw new UsageError('beams: is required (--beams START:STOP:STEP or a JSON file of {azDeg, elDeg})');
   const threshold = values.threshold === undefined ? null : Number(values.threshold);
   if (threshold !== null && !(threshold >= 0)) throw new UsageError('threshold: must be a number of degrees from 0');
-  const design = readDesign(values.candidate);
+  const { design, name } = readDesign(values.candidate);
   const beams = readBeams(values.beams);
   const calibration = values.calibration ? readCalibration(values.calibration) : null;
-  process.stdout.write(codesCsv(codesTable(design, beams, { calibration, pointingThresholdDeg: threshold })));
+  process.stdout.write(codesCsv(codesTable(design, beams, { calibration, pointingThresholdDeg: threshold, candidate: name })));
   return 0;
 }
