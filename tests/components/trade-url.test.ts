@@ -41,3 +41,12 @@ describe('the trade view in the URL', () => {
     expect(back.ranges.scanLossEdgeDb).toEqual({ min: 0.5, max: 2 });
   });
 });
+
+describe('withInitialSort', () => {
+  it('puts the view sort on the matching leaf column, inside groups, and nowhere else', async () => {
+    const { withInitialSort } = await import('@/components/trade/trade-url');
+    const { leafColumns, tradeColumns } = await import('@/components/trade/trade-columns');
+    const cols = leafColumns(withInitialSort(tradeColumns({ sheet: null }), { sort: [{ key: 'edgeEirpDbm', dir: 'desc' }], ranges: {} }) as never);
+    expect(cols.filter((c) => c.initialSort).map((c) => [c.colId, c.initialSort])).toEqual([['edgeEirpDbm', 'desc']]);
+  });
+});

@@ -3,6 +3,7 @@
  * describes: `?sweep=<id>&sort=edgeEirpDbm:desc&filter={"channels":{"max":8}}&ticked=3,17&point=17:4`.
  * Pure: the composable that reads and writes the route is use-trade-url.ts.
  */
+import type { ColDef, ColGroupDef } from 'ag-grid-community';
 import type { LocationQuery, LocationQueryRaw } from 'vue-router';
 import { TRADE_FIELDS, serverKeyOf } from '@shared/trade/trade-fields.ts';
 import { DESIGN_COL_ID } from './trade-columns';
@@ -109,4 +110,18 @@ export function gridStateOf(view: ViewQuery): { filterModel: Record<string, obje
     return colId ? [{ colId, sort: s.dir }] : [];
   });
   return { filterModel, sort };
+}
+
+type AnyCol<T> = ColDef<T> | ColGroupDef<T>;
+
+/**
+ * The columns with the view's sort as each column's initial sort (applied when the grid creates its columns, so a
+ * later header click is not fought).
+ */
+export function withInitialSort<T>(cols: AnyCol<T>[], view: ViewQuery): AnyCol<T>[] {
+  const { sort } = gridStateOf(view);
+  const dirOf = new Map(sort.map((s) => [s.colId, s.sort]));
+  const walk = (c: AnyCol<T>): AnyCol<T> =>
+    'children' in c ? { ...c, children: c.children.map(walk) } : dirOf.has(c.colId ?? '') ? { ...c, initialSort: dirOf.get(c.colId ?? '') } : c;
+  return cols.map(walk);
 }
