@@ -1,5 +1,7 @@
 import { DEG_PER_RAD } from '../engine/constants.ts';
+import { exposureEstimate } from '../safety/index.ts';
 import { autoStepDeg } from './auto-step-deg.ts';
+import { COVERAGE_CAUTIONS } from './coverage-cautions.ts';
 import type { CoverageInput } from '../schemas/coverage.ts';
 import type { CoverageResult, ServedDirection } from './coverage-result.ts';
 import { deviceEirp, type DeviceEirp, type Serving } from './device-eirp.ts';
@@ -76,5 +78,7 @@ export function computeCoverage(input: CoverageInput): CoverageResult {
       beams: m.beams.length,
       servedFraction: shares[i]!,
     })),
+    exposure: peakEirpDbm === null ? null : exposureEstimate({ eirpDbm: peakEirpDbm }),
+    cautions: [...COVERAGE_CAUTIONS],
   };
 }

@@ -1,3 +1,4 @@
+import type { ExposureEstimate } from '../safety/index.ts';
 import type { Region } from '../schemas/coverage.ts';
 
 /** A direction (device frame, degrees) with the module and beam serving it; null where nothing radiates. */
@@ -40,4 +41,8 @@ export interface CoverageResult {
   map: CoverageMap;
   /** Per module: conducted power and the share of the region's solid angle its beams serve best. */
   modules: { conductedPowerDbm: number; beams: number; servedFraction: number }[];
+  /** Far-field exposure estimate at the peak EIRP (1 m, ICNIRP 2020 reference); null when nothing radiates. */
+  exposure: ExposureEstimate | null;
+  /** Shown with every result: the model's limits (hand, head, housing) and the RF-exposure caution. */
+  cautions: string[];
 }

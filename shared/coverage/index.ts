@@ -9,3 +9,4 @@ export { coveredSolidAngleSr } from './covered-solid-angle.ts';
 export { gridCodebook, parseGridSpec } from './grid-codebook.ts';
 export { fillRegionCodebook, type FilledCodebook } from './fill-region-codebook.ts';
 export { autoStepDeg } from './auto-step-deg.ts';
+export { COVERAGE_CAUTIONS, COVERAGE_MODEL_CAUTION } from './coverage-cautions.ts';

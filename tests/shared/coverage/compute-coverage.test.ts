@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { computeCoverage } from '../../../shared/coverage/index.ts';
 import { coveredSolidAngleSr } from '../../../shared/coverage/covered-solid-angle.ts';
+import { RF_EXPOSURE_CAUTION } from '../../../shared/safety/index.ts';
 import { CoverageRequestSchema, type CoverageRequest } from '../../../shared/schemas/coverage.ts';
 
 const LAMBDA_28_MM = 299.792458 / 28;
@@ -22,6 +23,14 @@ describe('computeCoverage: closed forms', () => {
     expect(r.peakEirpDbm).toBeCloseTo(10, 9);
     expect(r.minEirpDbm).toBeCloseTo(10, 9);
     for (const v of Object.values(r.eirpPercentilesDbm)) expect(v).toBeCloseTo(10, 9);
+  });
+
+  it('carries the model and RF-exposure cautions and an exposure estimate at the peak with every result', () => {
+    const r = run({ modules: [{ design: single({ kind: 'isotropic' }, 30), orientation: 'front', beams: [{ azDeg: 0, elDeg: 0 }] }], region: { kind: 'sphere' }, stepDeg: 5 });
+    expect(r.cautions).toContain(RF_EXPOSURE_CAUTION);
+    expect(r.cautions.join(' ')).toMatch(/ignores the hand, the head and the device's own housing.*TR 38\.901 §7\.6\.4\.1.*compliance test measures the real device/);
+    // S = EIRP/(4π r²): 30 dBm = 1 W at 1 m → 1/(4π) W/m² (far-field formula, as in shared/safety).
+    expect(r.exposure!.densityWm2).toBeCloseTo(1 / (4 * Math.PI), 9);
   });
 
   it('modules facing opposite ways cover twice the solid angle of one (2π → 4π for a cos^q element)', () => {
