@@ -11,6 +11,11 @@ export class MailMessage {
   @Column({ type: 'uuid', nullable: true })
   teamId!: string | null;
 
+  /** From the X-Lobewise-Sent-By header: the user whose action sent it (an admin sees what they sent). */
+  @Index()
+  @Column({ type: 'uuid', nullable: true })
+  sentBy!: string | null;
+
   @Column({ type: 'text', nullable: true })
   messageId!: string | null;
 

@@ -1,13 +1,14 @@
 /**
  * A local SMTP server on loopback standing in for a mail relay: every message is parsed with mailparser
- * and kept, raw source too, in mail_messages so admins can read it on the outbox page.
+ * and kept, raw source too, in mail_messages, so each person can read the mail addressed to them on the
+ * outbox page (server/mail/outbox.ts says who sees what). Only started when SMTP_URL is not set.
  */
 import type { AddressInfo } from 'node:net';
 import { simpleParser, type AddressObject } from 'mailparser';
 import { SMTPServer } from 'smtp-server';
 import type { DataSource } from 'typeorm';
 import { MailMessage } from '../entities/mail-message.ts';
-import { TEAM_HEADER } from './mailer.ts';
+import { SENDER_HEADER, TEAM_HEADER } from './mailer.ts';
 
 export interface FakeSmtp {
   port: number;
@@ -26,11 +27,13 @@ function addresses(field: AddressObject | AddressObject[] | undefined): string[]
 async function store(db: DataSource, raw: Buffer): Promise<void> {
   const parsed = await simpleParser(raw);
   const team = parsed.headers.get(TEAM_HEADER.toLowerCase());
+  const sender = parsed.headers.get(SENDER_HEADER.toLowerCase());
   await db.getRepository(MailMessage).insert({
     teamId: typeof team === 'string' && UUID.test(team) ? team : null,
+    sentBy: typeof sender === 'string' && UUID.test(sender) ? sender : null,
     messageId: parsed.messageId ?? null,
     fromAddress: addresses(parsed.from)[0] ?? '',
-    toAddresses: addresses(parsed.to),
+    toAddresses: addresses(parsed.to).map((a) => a.toLowerCase()),
     subject: parsed.subject ?? '',
     textBody: parsed.text ?? '',
     htmlBody: typeof parsed.html === 'string' ? parsed.html : null,

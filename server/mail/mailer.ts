@@ -6,8 +6,13 @@ export interface MailInput {
   subject: string;
   text: string;
   html?: string;
-  /** Team the message concerns; the local outbox shows it to that team's admins only. */
+  /** Team the message concerns (kept with the stored copy in the local outbox). */
   teamId?: string;
+  /**
+   * The signed-in user whose action sends it (an invitation's admin); the local outbox shows a message to its
+   * recipients and to this sender. Never set for mail carrying a secret meant for the recipient alone (resets).
+   */
+  sentBy?: string;
 }
 
 export interface Mailer {
@@ -16,12 +21,14 @@ export interface Mailer {
 }
 
 export const TEAM_HEADER = 'X-Lobewise-Team';
+export const SENDER_HEADER = 'X-Lobewise-Sent-By';
 
 export function createMailer(smtpUrl: string, from: string): Mailer {
   const transport = nodemailer.createTransport(smtpUrl);
   return {
-    async send({ to, subject, text, html, teamId }) {
-      await transport.sendMail({ from, to, subject, text, html, headers: teamId ? { [TEAM_HEADER]: teamId } : {} });
+    async send({ to, subject, text, html, teamId, sentBy }) {
+      const headers = { ...(teamId ? { [TEAM_HEADER]: teamId } : {}), ...(sentBy ? { [SENDER_HEADER]: sentBy } : {}) };
+      await transport.sendMail({ from, to, subject, text, html, headers });
     },
     close: () => transport.close(),
   };

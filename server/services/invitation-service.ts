@@ -67,7 +67,7 @@ export async function inviteMember(
     return saved;
   });
   const mail = invitationMail({ teamName: team.name, inviterName: admin.name, role: input.role, link: `${baseUrl}/invite/${token}` });
-  await ctx.mailer.send({ to: input.email, ...mail, teamId: admin.teamId });
+  await ctx.mailer.send({ to: input.email, ...mail, teamId: admin.teamId, sentBy: admin.id });
   return view(row);
 }
 

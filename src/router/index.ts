@@ -21,7 +21,7 @@ export const routes: RouteRecordRaw[] = [
       { path: '', name: 'home', component: () => import('@/views/HomeView.vue'), meta: { title: 'Studies' } },
       { path: 'account', name: 'account', component: () => import('@/views/AccountView.vue'), meta: { title: 'Account' } },
       { path: 'team', name: 'team', component: () => import('@/views/TeamView.vue'), meta: { title: 'Team' } },
-      { path: 'outbox', name: 'outbox', component: () => import('@/views/OutboxView.vue'), meta: { title: 'Mail' } },
+      { path: 'outbox', name: 'outbox', component: () => import('@/views/OutboxView.vue'), meta: { title: 'Outbox' } },
       { path: 'studies/:id', name: 'study', component: () => import('@/views/StudyView.vue'), meta: { title: 'Study' } },
     ],
   },

@@ -63,8 +63,10 @@ export const fixtures: Fixture[] = [
     });
     const reset = newToken();
     await ctx.db.getRepository(PasswordReset).save({ userId: team.reviewer.id, tokenHash: reset.hash, expiresAt: new Date(Date.now() + 3600_000) });
+    // An invitation the admin sent: the outbox shows it to its recipient and to that admin only.
     const message = await ctx.db.getRepository(MailMessage).save({
       teamId: team.team.id,
+      sentBy: team.admin.id,
       fromAddress: 'no-reply@lobewise.test',
       toAddresses: ['invitee@example.test'],
       subject: 'matrix',
@@ -182,8 +184,8 @@ export const matrix: MatrixRow[] = [
   { method: 'DELETE', path: '/api/team/invitations/:invitationId', ...adminOnly(204, 404) },
 
   // outbox
-  { method: 'GET', path: '/api/outbox', ...adminOnly(200) },
-  { method: 'GET', path: '/api/outbox/:messageId', ...adminOnly(200, 404) },
+  { method: 'GET', path: '/api/outbox', ...member(200) },
+  { method: 'GET', path: '/api/outbox/:messageId', anonymous: 401, reviewer: 404, engineer: 404, admin: 200, otherTeam: 404 },
 
   // study shares: the study is team-visible and owned by team A's engineer
   { method: 'GET', path: '/api/studies/:studyId/shares', anonymous: 401, reviewer: 403, engineer: 200, admin: 403, otherTeam: 404 },
