@@ -8,6 +8,7 @@ import { designLabel } from './design-label.ts';
 import { drawChart } from './pdf-chart.ts';
 import { pdfText, registerPacketFonts, type PacketFonts } from './pdf-fonts.ts';
 import { drawTable } from './pdf-table.ts';
+import { COST_COLUMNS, costComparison } from './cost-comparison.ts';
 
 const MARGIN = { top: 64, bottom: 56, left: 50, right: 50 };
 // Our palette (src/styles/theme.ts): ink, teal, rust.
@@ -135,6 +136,16 @@ function decision(doc: PDFKit.PDFDocument, f: PacketFonts, data: PacketData): vo
   }
 }
 
+/** Cost, DC power and heat of the ranked sweep designs beside edge EIRP, the signed one marked. */
+function costs(doc: PDFKit.PDFDocument, f: PacketFonts, data: PacketData): void {
+  const c = costComparison(data.sweepRanked, data.decision?.source ?? null);
+  if (c.rows.length === 0) return;
+  heading(doc, f, 'Cost and power: the chosen design and the alternatives');
+  if (!c.priced) return para(doc, f, 'The study has no cost model, so its designs carry no cost, DC power or heat figures.');
+  para(doc, f, 'Priced with the study\'s cost model (its own inputs, not quotes). DC power is the average draw over the transmit duty cycle; heat is per cm² of the module outline.', { color: MUTED });
+  drawTable(doc, f, COST_COLUMNS, c.rows, 8);
+}
+
 function charts(doc: PDFKit.PDFDocument, f: PacketFonts, data: PacketData): void {
   const c = data.chart;
   if (!c || c.points.length === 0) return;
@@ -210,6 +221,7 @@ export function renderPacketPdf(data: PacketData): Promise<Buffer> {
   targetSheet(doc, fonts, data);
   ranked(doc, fonts, data);
   decision(doc, fonts, data);
+  costs(doc, fonts, data);
   charts(doc, fonts, data);
   history(doc, fonts, data);
   exposure(doc, fonts, data);
