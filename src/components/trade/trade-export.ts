@@ -64,6 +64,8 @@ export interface AboutInput {
   /** Rows the view holds (the export may stop at a cap). */
   total: number;
   at: Date;
+  /** Which cost model priced the cost columns, in words (the "Module cost" column is in its currency). */
+  costModel?: string | null;
 }
 
 const titleOfKey = (key: string) => {
@@ -94,6 +96,7 @@ export function exportAbout(a: AboutInput): [string, string][] {
     ['Filters', a.rows === 'ticked' ? 'none (ticked designs)' : filtersText(a.view)],
     ['Sort', sort ? `${titleOfKey(sort.key)}, ${sort.dir === 'asc' ? 'ascending' : 'descending'}` : 'design number'],
     ['Rows', which],
+    ...(a.costModel ? ([['Cost model', a.costModel]] as [string, string][]) : []),
     ['Exported at', a.at.toISOString()],
   ];
 }
