@@ -31,6 +31,8 @@ const EnvSchema = z.object({
   REQUEST_WORK_BUDGET: z.coerce.number().min(1e5).max(1e12).default(5e8),
   /** Heavy requests (evaluate, bench maths) one user may have running at once; more answer 429. */
   HEAVY_REQUESTS_PER_USER: z.coerce.number().int().min(1).max(64).default(2),
+  /** Sweep progress streams (server-sent events) one user may have open at once; more answer 429. */
+  EVENT_STREAMS_PER_USER: z.coerce.number().int().min(1).max(256).default(8),
   SMTP_URL: z.string().optional(),
   SMTP_FAKE_PORT: port.default(2525),
   MAIL_FROM: z.string().default('Lobewise <no-reply@lobewise.test>'),

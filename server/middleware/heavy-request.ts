@@ -14,39 +14,32 @@
 import type { Request, RequestHandler } from 'express';
 import type { AppContext } from '../context.ts';
 import { ApiError } from '../errors.ts';
-import { userOf } from './require-auth.ts';
+import { userSlots } from './user-slots.ts';
 
 /** Seconds a refused client is asked to wait: heavy requests are sized to finish within seconds. */
 export const HEAVY_RETRY_AFTER_SECONDS = 2;
 
-// Per context (one per server process, one per test file), shared by every heavy route.
-const openByContext = new WeakMap<AppContext, Map<string, number>>();
 const signals = new WeakMap<Request, AbortSignal>();
 
 export function heavyRequest(ctx: AppContext): RequestHandler {
-  let open = openByContext.get(ctx);
-  if (!open) openByContext.set(ctx, (open = new Map()));
-  const counts = open;
-  return (req, res, next) => {
-    const userId = userOf(req).id;
-    const limit = ctx.config.HEAVY_REQUESTS_PER_USER;
-    const now = counts.get(userId) ?? 0;
-    if (now >= limit) {
-      res.setHeader('Retry-After', String(HEAVY_RETRY_AFTER_SECONDS));
-      return next(new ApiError(429, 'too_many_heavy_requests', `at most ${limit} heavy requests per user at once; retry after ${HEAVY_RETRY_AFTER_SECONDS} s`));
-    }
-    counts.set(userId, now + 1);
-    const controller = new AbortController();
-    signals.set(req, controller.signal);
-    // 'close' comes after the answer is sent, or when the connection drops first: only the latter aborts.
-    res.once('close', () => {
-      const left = (counts.get(userId) ?? 1) - 1;
-      if (left > 0) counts.set(userId, left);
-      else counts.delete(userId);
-      if (!res.writableFinished) controller.abort(new Error('client went away'));
+  const slot = userSlots(ctx, {
+    kind: 'heavy',
+    limit: (c) => c.HEAVY_REQUESTS_PER_USER,
+    code: 'too_many_heavy_requests',
+    what: 'heavy requests',
+    retryAfterSeconds: HEAVY_RETRY_AFTER_SECONDS,
+  });
+  return (req, res, next) =>
+    slot(req, res, (err?: unknown) => {
+      if (err) return next(err);
+      const controller = new AbortController();
+      signals.set(req, controller.signal);
+      // 'close' comes after the answer is sent, or when the connection drops first: only the latter aborts.
+      res.once('close', () => {
+        if (!res.writableFinished) controller.abort(new Error('client went away'));
+      });
+      next();
     });
-    next();
-  };
 }
 
 /** The request's abort signal (set by heavyRequest); a never-aborting one on routes without it. */

@@ -2,53 +2,19 @@
  * Sweeps: start one in a study, list a study's sweeps, follow progress (JSON or server-sent events),
  * cancel, and read results (points, design rows, CSV). Mounted at /api.
  */
-import { Router, type Request, type Response } from 'express';
+import { Router, type Request } from 'express';
 import { DesignsQuerySchema, PointsQuerySchema, type ResultsQuery } from '../../shared/sweep/results-query.ts';
 import { SweepIdParamsSchema, SweepRequestSchema, type SweepRequest } from '../../shared/sweep/request.ts';
 import type { AppContext } from '../context.ts';
-import { FINISHED_STATUSES } from '../entities/sweep.ts';
+import { eventStreamSlot, streamProgress } from '../sweeps/progress-stream.ts';
 import { requireAuth, requireRole } from '../middleware/require-auth.ts';
 import { validate } from '../middleware/validate.ts';
 import { listDesigns, listPoints, writePointsCsv } from '../services/sweep-results.ts';
-import { cancelSweep, createSweep, findSweepFor, getSweep, listSweeps, reloadProgress } from '../services/sweep-service.ts';
+import { cancelSweep, createSweep, findSweepFor, getSweep, listSweeps } from '../services/sweep-service.ts';
 
 const id = validate({ params: SweepIdParamsSchema });
 const idOf = (req: Request) => String(req.params.id);
 const queryOf = (req: Request) => req.query as unknown as ResultsQuery;
-
-/** How often the event stream re-reads progress, and how often it sends a keep-alive comment. */
-const EVENT_POLL_MS = 500;
-const KEEPALIVE_MS = 15_000;
-
-async function streamProgress(ctx: AppContext, req: Request, res: Response): Promise<void> {
-  const first = await getSweep(ctx, req.user!, idOf(req));
-  res.writeHead(200, { 'content-type': 'text/event-stream', 'cache-control': 'no-cache', connection: 'keep-alive', 'x-accel-buffering': 'no' });
-  let last = '';
-  let lastSent = Date.now();
-  let closed = false;
-  req.on('close', () => {
-    closed = true;
-  });
-  let p: typeof first | null = first;
-  while (!closed && p) {
-    const text = JSON.stringify(p);
-    if (text !== last) {
-      res.write(`event: progress\ndata: ${text}\n\n`);
-      last = text;
-      lastSent = Date.now();
-    } else if (Date.now() - lastSent > KEEPALIVE_MS) {
-      res.write(': keep-alive\n\n');
-      lastSent = Date.now();
-    }
-    if (FINISHED_STATUSES.has(p.status)) break;
-    await new Promise((r) => setTimeout(r, EVENT_POLL_MS));
-    p = await reloadProgress(ctx, p.id);
-  }
-  if (!closed) {
-    res.write('event: end\ndata: {}\n\n');
-    res.end();
-  }
-}
 
 export function sweepsRouter(ctx: AppContext): Router {
   const router = Router();
@@ -61,7 +27,7 @@ export function sweepsRouter(ctx: AppContext): Router {
   router.get('/sweeps/:id', requireAuth, id, async (req, res) => {
     res.json(await getSweep(ctx, req.user!, idOf(req)));
   });
-  router.get('/sweeps/:id/events', requireAuth, id, (req, res) => streamProgress(ctx, req, res));
+  router.get('/sweeps/:id/events', requireAuth, eventStreamSlot(ctx), id, (req, res) => streamProgress(ctx, req, res));
   router.post('/sweeps/:id/cancel', requireRole('engineer'), id, async (req, res) => {
     res.json(await cancelSweep(ctx, req.user!, idOf(req)));
   });
