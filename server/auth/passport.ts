@@ -4,6 +4,7 @@ import { Strategy as LocalStrategy } from 'passport-local';
 import type { AppContext } from '../context.ts';
 import { findAuthUser, verifyCredentials } from '../services/user-service.ts';
 import type { AuthUser } from './types.ts';
+import { cachedUser } from './user-cache.ts';
 
 export type Authenticator = InstanceType<typeof Passport>;
 
@@ -20,7 +21,7 @@ export function createPassport(ctx: AppContext): Authenticator {
   passport.serializeUser((user, done) => done(null, (user as AuthUser).id));
   passport.deserializeUser((id: string, done) => {
     // A removed member's session simply stops being signed in.
-    findAuthUser(ctx, id).then(
+    cachedUser(ctx, id, () => findAuthUser(ctx, id)).then(
       (user) => done(null, user ?? false),
       (err: unknown) => done(err),
     );

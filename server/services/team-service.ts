@@ -1,4 +1,5 @@
 import { QueryFailedError, type EntityManager } from 'typeorm';
+import { forgetCachedUser } from '../auth/session.ts';
 import type { AuthUser } from '../auth/types.ts';
 import type { AppContext } from '../context.ts';
 import { Study } from '../entities/study.ts';
@@ -43,7 +44,7 @@ async function assertAnotherAdminRemains(m: EntityManager, teamId: string, userI
 }
 
 export async function changeRole(ctx: AppContext, actor: AuthUser, userId: string, role: TeamRole): Promise<MemberView> {
-  return ctx.db.transaction(async (m) => {
+  const view = await ctx.db.transaction(async (m) => {
     const user = await memberOf(m, actor, userId);
     if (user.role === role) return memberView(user);
     if (user.role === 'admin') await assertAnotherAdminRemains(m, actor.teamId, user.id);
@@ -53,6 +54,8 @@ export async function changeRole(ctx: AppContext, actor: AuthUser, userId: strin
     await audit(ctx, actor, 'team.role_changed', { type: 'user', id: user.id }, { email: user.email, from, to: role }, m);
     return memberView(user);
   });
+  forgetCachedUser(ctx, userId); // the new role applies from their next request
+  return view;
 }
 
 async function removeInTransaction(ctx: AppContext, m: EntityManager, actor: AuthUser, userId: string): Promise<void> {
@@ -70,6 +73,7 @@ async function removeInTransaction(ctx: AppContext, m: EntityManager, actor: Aut
 export async function removeMember(ctx: AppContext, actor: AuthUser, userId: string): Promise<void> {
   try {
     await ctx.db.transaction((m) => removeInTransaction(ctx, m, actor, userId));
+    forgetCachedUser(ctx, userId); // their sessions are gone from the database; drop the cached copies too
   } catch (err) {
     // Records that must keep their author (sign-offs) still refer to this member.
     if (err instanceof QueryFailedError && (err.driverError as { code?: string }).code === '23503') {

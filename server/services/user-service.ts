@@ -1,6 +1,7 @@
 import type { EntityManager } from 'typeorm';
 import { fieldError } from '../auth/errors.ts';
 import { hashPassword, verifyPassword } from '../auth/password.ts';
+import { forgetCachedUser } from '../auth/session.ts';
 import type { AuthUser } from '../auth/types.ts';
 import type { AppContext } from '../context.ts';
 import { User } from '../entities/user.ts';
@@ -11,9 +12,10 @@ export function toAuthUser(u: User): AuthUser {
   return { id: u.id, email: u.email, name: u.name, role: u.role, teamId: u.teamId };
 }
 
+/** Runs on every signed-in request (passport's deserializeUser): one plain query, not TypeORM's query builder. */
 export async function findAuthUser(ctx: AppContext, id: string): Promise<AuthUser | null> {
-  const user = await ctx.db.getRepository(User).findOneBy({ id });
-  return user ? toAuthUser(user) : null;
+  const rows = (await ctx.db.query('SELECT id, email, name, role, team_id AS "teamId" FROM users WHERE id = $1', [id])) as AuthUser[];
+  return rows[0] ?? null;
 }
 
 /** The user for this e-mail and password, or null; unknown e-mails cost the same time as wrong passwords. */
@@ -26,6 +28,7 @@ export async function verifyCredentials(ctx: AppContext, email: string, password
 export async function updateProfile(ctx: AppContext, actor: AuthUser, name: string): Promise<AuthUser> {
   const repo = ctx.db.getRepository(User);
   await repo.update({ id: actor.id }, { name });
+  forgetCachedUser(ctx, actor.id);
   const user = await repo.findOneBy({ id: actor.id });
   if (!user) throw NotFound('user');
   return toAuthUser(user);
@@ -38,6 +41,8 @@ export async function setPassword(ctx: AppContext, userId: string, password: str
 /** Signs the user out everywhere else: their other sessions are deleted. */
 export async function endOtherSessions(ctx: AppContext, userId: string, keepSid?: string): Promise<void> {
   await ctx.db.query(`DELETE FROM sessions WHERE sess->'passport'->>'user' = $1 AND sid <> $2`, [userId, keepSid ?? '']);
+  // The kept session (if any) is simply read again from the database.
+  forgetCachedUser(ctx, userId);
 }
 
 export async function changePassword(

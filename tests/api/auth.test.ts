@@ -139,6 +139,7 @@ describe('GET /api/me and sign-out', () => {
 
   it('destroys the session at sign-out', async () => {
     const client = await authed(api.app, api.team.admin);
+    expect((await client.get('/api/me')).status).toBe(200); // now in the server's session cache
     const out = await client.post('/api/auth/logout');
     expect(out.status).toBe(204);
     expect((await client.get('/api/me')).status).toBe(401);
@@ -149,6 +150,7 @@ describe('GET /api/me and sign-out', () => {
   it('a removed member is signed out on their next request', async () => {
     const engineer = await authed(api.app, api.team.engineer);
     const admin = await authed(api.app, api.team.admin);
+    expect((await engineer.get('/api/me')).status).toBe(200); // now in the server's session cache
     expect((await admin.delete(`/api/team/members/${api.team.engineer.id}`)).status).toBe(204);
     expect((await engineer.get('/api/me')).status).toBe(401);
   });
