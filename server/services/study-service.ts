@@ -121,6 +121,11 @@ export async function duplicateStudy(ctx: AppContext, user: AuthUser, studyId: s
         })),
       );
     }
+    // The cost model travels with the copy (as version 1: the copy has no sweeps priced yet).
+    await m.query(
+      `INSERT INTO study_cost_models (study_id, model, version, updated_by) SELECT $2, model, 1, $3 FROM study_cost_models WHERE study_id = $1`,
+      [source.id, copy.id, user.id],
+    );
     return copy;
   });
 }

@@ -147,3 +147,12 @@ describe('cost columns of a sweep', () => {
     expect(byNx(page.body.rows, 4).dcPowerW).toBeCloseTo(0.46, 9);
   });
 });
+
+describe('duplicating a study', () => {
+  it('copies its cost model as version 1 of the copy', async () => {
+    const res = await engineer.post(`/api/studies/${studyId}/duplicate`);
+    expect(res.status).toBe(201);
+    const copy = await engineer.get(`/api/studies/${res.body.id}/cost-model`);
+    expect(copy.body).toMatchObject({ model: { ...MODEL_A, chipPrice: 100, txDutyCycle: 1 }, version: 1 });
+  });
+});
