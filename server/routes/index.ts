@@ -42,7 +42,7 @@ export function apiRouter(ctx: AppContext): Router {
   api.use(benchRouter(ctx));
   api.use(rangeDataRouter(ctx));
   api.use(elementPatternsRouter(ctx));
-  api.use('/coverage', coverageRouter());
+  api.use('/coverage', coverageRouter(ctx));
   // Anything else under /api is a JSON 404, never the client's index.html.
   api.use((req, _res, next) => next(NotFound(`route ${req.method} ${req.baseUrl}${req.path}`)));
   return api;

@@ -63,9 +63,6 @@ export const CoverageModuleSchema = z
     if (m.design.channelPowerDbm === null) {
       ctx.addIssue({ code: 'custom', path: ['design', 'channelPowerDbm'], message: 'must be set for coverage (EIRP needs the power per channel)' });
     }
-    if (m.design.element.kind === 'table' && m.design.element.pattern === undefined) {
-      ctx.addIssue({ code: 'custom', path: ['design', 'element', 'pattern'], message: 'must be given with a table element here (the pattern values, not only its id)' });
-    }
     if (m.design.codes !== null) {
       ctx.addIssue({ code: 'custom', path: ['design', 'codes'], message: 'must be null in a module (its beams set the phases)' });
     }

@@ -2,9 +2,10 @@ import { spawnSync } from 'node:child_process';
 import request from 'supertest';
 import { afterAll, describe, expect, it } from 'vitest';
 import { destroyCoveragePool } from '../../server/coverage/coverage-pool.ts';
+import { ElementPatternRow } from '../../server/entities/element-pattern.ts';
 import { useApiTest } from '../helpers/app.ts';
 
-const api = useApiTest({ signIn: ['reviewer'] });
+const api = useApiTest({ signIn: ['reviewer', 'engineer', 'outsider'] });
 afterAll(async () => {
   await destroyCoveragePool(); // before the helper closes the database
 });
@@ -47,6 +48,25 @@ describe('POST /api/coverage', () => {
     expect(cli.stdout).toBe('');
     expect(cli.stderr.trim().split('\n')).toHaveLength(1);
     expect(cli.stderr).toMatch(/^modules\[0\]\.orientation: must be one of/);
+  });
+
+  it('fills a table element named by id from a study the caller may read, and names the field for anyone else', async () => {
+    const studyId = (await api.engineer.post('/api/studies').send({ name: 'Flat element' })).body.id as string;
+    // A flat 5 dBi table pattern: a one-element module then radiates P + 5 dBi toward every direction (closed form).
+    const pattern = { azDeg: [-180, -90, 0, 90, 180], elDeg: [-90, 0, 90], gainDbi: new Array(15).fill(5) };
+    const row = await api.ctx.db.getRepository(ElementPatternRow).save({ studyId, name: 'Flat', originalFilename: 'flat.csv', raw: Buffer.from('x'), pattern, createdBy: null });
+    const request = {
+      modules: [{ design: { frequencyGHz: 28, nx: 1, dxMm: 5, element: { kind: 'table', patternId: row.id }, channelPowerDbm: 7 }, orientation: 'front', beams: [{ azDeg: 0, elDeg: 0 }] }],
+      region: { kind: 'sector', azMinDeg: -60, azMaxDeg: 60, elMinDeg: -30, elMaxDeg: 30 },
+      stepDeg: 5,
+    };
+    const res = await api.reviewer.post('/api/coverage').send(request);
+    expect(res.status).toBe(200);
+    expect(res.body.peakEirpDbm).toBeCloseTo(12, 9);
+    expect(res.body.minEirpDbm).toBeCloseTo(12, 9);
+    const outsider = await api.outsider.post('/api/coverage').send(request);
+    expect(outsider.status).toBe(400);
+    expect(outsider.body.error.fields[0].field).toBe('modules[0].design.element.patternId');
   });
 
   it('is for signed-in users only', async () => {
