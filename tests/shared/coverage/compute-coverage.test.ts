@@ -25,6 +25,25 @@ describe('computeCoverage: closed forms', () => {
     for (const v of Object.values(r.eirpPercentilesDbm)) expect(v).toBeCloseTo(10, 9);
   });
 
+  it('finds the dip midway between two beams at the depth the uniform-line array factor gives', () => {
+    // Balanis, Antenna Theory §6.3: |AF(ψ)|² = [sin(Nψ/2)/(N·sin(ψ/2))]²·N², ψ = k·d·Δu. Beams at u = ±0.1 of an
+    // 8-element λ/2 isotropic line (continuous phase) meet at u = 0, Δu = 0.1 from each: ψ = π/10, a dip of
+    // 20·log10(N·sin(π/20)/sin(2π/5)) = 2.384 dB below the peak N (9.03 dBi). The 5° grid never samples u = 0
+    // exactly, so this checks the dip search, not the grid.
+    const N = 8;
+    const design = { frequencyGHz: 28, nx: N, dxMm: LAMBDA_28_MM / 2, element: { kind: 'isotropic' as const }, channelPowerDbm: 0 };
+    const azDeg = (Math.asin(0.1) * 180) / Math.PI;
+    const r = run({
+      modules: [{ design, orientation: 'front', beams: [{ azDeg: -azDeg, elDeg: 0 }, { azDeg, elDeg: 0 }] }],
+      region: { kind: 'sector', azMinDeg: -4, azMaxDeg: 3, elMinDeg: -3, elMaxDeg: 2 },
+      stepDeg: 5,
+    });
+    const dipDb = 20 * Math.log10((N * Math.sin(Math.PI / 20)) / Math.sin((2 * Math.PI) / 5));
+    const peakDbm = 20 * Math.log10(N); // conducted 10·log10 8 dBm + gain 10·log10 8 dBi
+    expect(Math.abs(r.minEirpDbm! - (peakDbm - dipDb))).toBeLessThan(0.01);
+    expect(Math.abs(r.minAt.azDeg)).toBeLessThan(0.01);
+  });
+
   it('carries the model and RF-exposure cautions and an exposure estimate at the peak with every result', () => {
     const r = run({ modules: [{ design: single({ kind: 'isotropic' }, 30), orientation: 'front', beams: [{ azDeg: 0, elDeg: 0 }] }], region: { kind: 'sphere' }, stepDeg: 5 });
     expect(r.cautions).toContain(RF_EXPOSURE_CAUTION);
