@@ -6,12 +6,14 @@
  */
 import type { AppContext } from '../context.ts';
 import { Candidate } from '../entities/candidate.ts';
+import { Device } from '../entities/device.ts';
 import { Study } from '../entities/study.ts';
 import { TargetSheetRow } from '../entities/target-sheet.ts';
 import { User } from '../entities/user.ts';
 import { designRows, pointRow } from '../sweeps/rows.ts';
 import { ENGINE_VERSION } from '../../shared/engine/index.ts';
 import { DesignSchema, type DesignInput } from '../../shared/schemas/design.ts';
+import { DeviceLayoutSchema } from '../../shared/schemas/device.ts';
 import { evaluateRange } from '../../shared/sweep/evaluate-range.ts';
 import { compileGrid } from '../../shared/sweep/grid.ts';
 import type { SweepGridInput } from '../../shared/sweep/grid-schema.ts';
@@ -51,6 +53,32 @@ const CANDIDATES: { name: string; notes: string; design: DesignInput; sheet: 'ha
     sheet: 'smallCell',
   },
 ];
+
+/** Invented devices of the scenario: a phone with edge modules on both long sides, and the street panel. */
+function demoDevices(studyId: string, createdBy: string, candidates: Candidate[], sheetIds: { handset: string; smallCell: string }) {
+  const [edge, , panel] = candidates;
+  return [
+    {
+      studyId, createdBy, position: 0, name: 'Kestrel phone: two edge modules', targetSheetId: sheetIds.handset,
+      notes: 'Invented: the 1×4 edge module on each long side of the phone, each with a 7-beam azimuth codebook.',
+      layout: DeviceLayoutSchema.parse({
+        outline: { widthMm: 72, heightMm: 150, depthMm: 8 },
+        modules: [
+          { candidateId: edge!.id, face: 'right', u: 0.5, v: 0.75, codebook: { kind: 'grid', grid: 'az -45:45:15 × el 0' } },
+          { candidateId: edge!.id, face: 'left', u: 0.5, v: 0.25, codebook: { kind: 'grid', grid: 'az -45:45:15 × el 0' } },
+        ],
+      }),
+    },
+    {
+      studyId, createdBy, position: 1, name: 'Street panel 8×8', targetSheetId: sheetIds.smallCell,
+      notes: 'Invented: the 39 GHz panel on the front of a pole box, its codebook filling the service sector within 3 dB.',
+      layout: DeviceLayoutSchema.parse({
+        outline: { widthMm: 200, heightMm: 300, depthMm: 60 },
+        modules: [{ candidateId: panel!.id, face: 'front', codebook: { kind: 'fill', crossoverDb: 3, azMinDeg: -50, azMaxDeg: 50, elMinDeg: -10, elMaxDeg: 10 } }],
+      }),
+    },
+  ];
+}
 
 /** 96 designs × 7 steering angles = 672 points: small enough to compute at start-up in about a second. */
 export const DEMO_GRID: SweepGridInput = {
@@ -96,12 +124,13 @@ export async function seedDemoStudy(ctx: AppContext): Promise<{ studyId: string;
     const handset = await sheets.save(sheets.create({ studyId: study.id, preset: HANDSET_28GHZ.id, sheet: HANDSET_28GHZ.sheet, position: 0 }));
     const smallCell = await sheets.save(sheets.create({ studyId: study.id, preset: SMALL_CELL_39GHZ.id, sheet: SMALL_CELL_39GHZ.sheet, position: 1 }));
     const sheetIds = { handset: handset.id, smallCell: smallCell.id };
-    await m.getRepository(Candidate).save(
+    const saved = await m.getRepository(Candidate).save(
       CANDIDATES.map((c, position) => ({
         studyId: study.id, name: c.name, notes: c.notes, design: DesignSchema.parse(c.design), createdBy: engineer.id, position,
         targetSheetId: sheetIds[c.sheet],
       })),
     );
+    await m.getRepository(Device).save(demoDevices(study.id, engineer.id, saved, sheetIds));
 
     const [sweep] = (await m.query(
       `INSERT INTO sweeps (study_id, name, grid, constraints, status, points_total, points_done, points_failed, designs_total,

@@ -75,6 +75,15 @@ describe('seedDemoStudy(ctx)', () => {
     expect(sweep.targetSheetId).toBe(sheets[0]!.id);
   });
 
+  it('holds a phone judged against the handset sheet and the panel against the small-cell sheet', async () => {
+    const list = (await engineer.get('/api/studies')).body as { id: string; name: string }[];
+    const study = list.find((s) => s.name === DEMO_STUDY_NAME)!;
+    const sheets = (await engineer.get(`/api/studies/${study.id}/target-sheets`)).body as { id: string }[];
+    const devices = (await engineer.get(`/api/studies/${study.id}/devices`)).body as { targetSheetId: string; layout: { modules: unknown[] } }[];
+    expect(devices.map((d) => d.targetSheetId)).toEqual([sheets[0]!.id, sheets[1]!.id]);
+    expect(devices.map((d) => d.layout.modules.length)).toEqual([2, 1]);
+  });
+
   it('stores points that match the engine evaluated afresh', async () => {
     const [row] = (await ctx.db.query(
       `SELECT design, metrics FROM sweep_points WHERE error IS NULL ORDER BY point_index LIMIT 1 OFFSET 137`,
