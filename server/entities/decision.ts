@@ -17,6 +17,8 @@ export interface FrozenMetrics {
   points: FrozenPoint[];
   /** Worst-case figures over the points (shared/targets figuresFromPoints). */
   figures: Record<string, unknown>;
+  /** The steering angles the figures are worst cases over, in words (printed in the packet beside them). */
+  basis?: string;
 }
 
 export interface DecisionAlternative {
@@ -70,6 +72,22 @@ export class Decision {
 
   @Column({ type: 'uuid', nullable: true })
   supersedesId!: string | null;
+
+  /** The target sheet the design was judged against (null: the study had none). */
+  @Column({ type: 'uuid', nullable: true })
+  targetSheetId!: string | null;
+
+  /** The sheet as it was when judged, so later edits of the sheet never change what was signed. */
+  @Column({ type: 'jsonb', nullable: true })
+  targetSheet!: Record<string, unknown> | null;
+
+  /** The sheet's limits the design failed (limit keys), empty when it passed every one. */
+  @Column({ type: 'text', array: true, default: () => "'{}'" })
+  failedLimits!: string[];
+
+  /** Why it was signed although it fails limits; required then. */
+  @Column({ type: 'text', default: '' })
+  justification!: string;
 
   @CreateDateColumn({ type: 'timestamptz' })
   createdAt!: Date;

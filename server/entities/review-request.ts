@@ -1,7 +1,7 @@
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { REVIEW_REQUEST_STATES, type ReviewRequestState } from '../../shared/schemas/review.ts';
 
-export const REVIEW_REQUEST_STATES = ['asked', 'approved', 'changes_requested'] as const;
-export type ReviewRequestState = (typeof REVIEW_REQUEST_STATES)[number];
+export { REVIEW_REQUEST_STATES, type ReviewRequestState };
 
 /** One reviewer asked to review one study, and their answer. */
 @Entity({ name: 'review_requests' })

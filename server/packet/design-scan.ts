@@ -1,16 +1,13 @@
 /**
- * A design given directly (not from a sweep) evaluated across a scan, so a decision and the packet have
- * per-angle metrics to freeze and chart. The scan follows the target sheet's range when it sets one.
+ * A design given directly (a candidate, or a design signed without a sweep) evaluated over the steering angles it is
+ * judged at (shared/targets/scan-angles.ts), so a decision and the packet have per-angle metrics to freeze and chart,
+ * and their worst cases are those the candidate preview shows.
  */
 import { evaluateDesign, type Metrics } from '../../shared/engine/index.ts';
 import type { Design } from '../../shared/schemas/design.ts';
 import { figuresFromPoints, type DesignFigures } from '../../shared/targets/figures.ts';
-import type { ScanRange, TargetSheet } from '../../shared/targets/sheet.ts';
-
-/** Scan covered when the target sheet sets none (degrees from broadside). */
-export const DEFAULT_SCAN_DEG: ScanRange = { min: 0, max: 60 };
-/** Angles per scan: enough for a smooth chart, few enough to stay interactive for a 64 × 64 array. */
-export const SCAN_STEPS = 13;
+import { scanAngles, scanAnglesText } from '../../shared/targets/scan-angles.ts';
+import type { TargetSheet } from '../../shared/targets/sheet.ts';
 
 export interface ScanPoint {
   steerAzDeg: number;
@@ -25,30 +22,18 @@ export interface DesignScan {
   axis: 'az' | 'el';
   points: ScanPoint[];
   figures: DesignFigures;
+  /** Over which steering angles the figures are worst cases, in words. */
+  basis: string;
 }
 
-function angles(range: ScanRange): number[] {
-  if (range.max - range.min < 1e-9) return [range.min];
-  const step = (range.max - range.min) / (SCAN_STEPS - 1);
-  return Array.from({ length: SCAN_STEPS }, (_, i) => Math.round((range.min + i * step) * 1000) / 1000);
-}
-
-/** Evaluates `design` at its steering and across the scan; explicit phase codes fix the beam, so no scan then. */
+/** Evaluates `design` at its steering and at every angle it is judged at under `sheet`. */
 export function scanDesign(design: Design, sheet: TargetSheet | null = null): DesignScan {
   const at = evaluateDesign(design);
   const axis = design.grouping === 'row' ? 'el' : 'az';
-  if (design.codes !== null) {
-    const points = [{ steerAzDeg: design.steerAzDeg, steerElDeg: design.steerElDeg, metrics: at }];
-    return { at, axis, points, figures: figuresFromPoints(points.map(asFigurePoint)) };
-  }
-  const range = (axis === 'az' ? sheet?.scanAzDeg : sheet?.scanElDeg) ?? DEFAULT_SCAN_DEG;
-  const points = angles(range).map((deg) => {
-    const steered: Design = axis === 'az' ? { ...design, steerAzDeg: deg } : { ...design, steerElDeg: deg };
-    return { steerAzDeg: steered.steerAzDeg, steerElDeg: steered.steerElDeg, metrics: evaluateDesign(steered) };
+  const points = scanAngles(design, sheet?.scanAzDeg, sheet?.scanElDeg).map(([a, e]) => {
+    const own = a === design.steerAzDeg && e === design.steerElDeg;
+    return { steerAzDeg: a, steerElDeg: e, metrics: own ? at : evaluateDesign({ ...design, steerAzDeg: a, steerElDeg: e }) };
   });
-  return { at, axis, points, figures: figuresFromPoints(points.map(asFigurePoint)) };
-}
-
-function asFigurePoint(p: ScanPoint) {
-  return { design: { steerAzDeg: p.steerAzDeg, steerElDeg: p.steerElDeg }, metrics: p.metrics };
+  const figures = figuresFromPoints(points.map((p) => ({ design: { steerAzDeg: p.steerAzDeg, steerElDeg: p.steerElDeg }, metrics: p.metrics })));
+  return { at, axis, points, figures, basis: scanAnglesText(design, sheet?.scanAzDeg, sheet?.scanElDeg) };
 }

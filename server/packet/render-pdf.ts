@@ -4,7 +4,8 @@
  */
 import PDFDocument from 'pdfkit';
 import type { PacketData } from '../services/packet-service.ts';
-import { designLabel } from './design-label.ts';
+import { LIMIT_LABELS, type LimitKey } from '../../shared/targets/sheet.ts';
+import { designLabel } from '../../shared/trade/design-label.ts';
 import { drawChart } from './pdf-chart.ts';
 import { pdfText, registerPacketFonts, type PacketFonts } from './pdf-fonts.ts';
 import { drawTable } from './pdf-table.ts';
@@ -72,6 +73,7 @@ function targetSheet(doc: PDFKit.PDFDocument, f: PacketFonts, data: PacketData):
   const sheet = data.targetSheet;
   if (!sheet || sheet.limits.length === 0) return para(doc, f, 'No target sheet limits are set for this study.');
   if (sheet.name) para(doc, f, sheet.name + (sheet.preset ? ` (from preset ${sheet.preset})` : ''), { bold: true });
+  if (sheet.judgedDecision) para(doc, f, 'The sheet the signed decision was judged against, as it was when signed.', { color: MUTED });
   drawTable(doc, f, [{ title: 'Limit', width: 3 }, { title: 'Required', width: 2 }], sheet.limits.map((l) => [l.label, l.value]));
 }
 
@@ -115,6 +117,7 @@ function ranked(doc: PDFKit.PDFDocument, f: PacketFonts, data: PacketData): void
   const s = data.sweepRanked;
   if (!s) return para(doc, f, 'The study has no finished sweep yet.');
   para(doc, f, s.summary, { color: MUTED });
+  para(doc, f, `Worst cases of each sweep design are taken over ${s.basis}.`, { color: MUTED });
   if (s.rows.length === 0) return;
   // Each label carries the sweep's long name, so the design column takes a larger share here.
   const cols = RANK_COLUMNS.map((c) => (c.title === 'Design' ? { ...c, width: 5.2 } : c.title === 'Verdict' ? { ...c, width: 1.1 } : c));
@@ -126,7 +129,21 @@ function decision(doc: PDFKit.PDFDocument, f: PacketFonts, data: PacketData): vo
   const d = data.decision;
   if (!d) return para(doc, f, 'No decision has been signed for this study yet.');
   para(doc, f, `Chosen design: ${d.label}`, { bold: true });
-  para(doc, f, `Parameters: ${designLabel(d.design)}`);
+  para(doc, f, `Parameters: ${designLabel(d.design, { frequency: true })}`);
+  if (d.metrics.basis) para(doc, f, `Its figures are worst cases over ${d.metrics.basis}.`, { color: MUTED });
+  const check = d.check;
+  if (check && d.targetSheet) {
+    const rows = Object.entries(check.limits).map(([key, c]) => [
+      LIMIT_LABELS[key as LimitKey] ?? key,
+      c.pass === null ? 'n/a' : c.pass ? 'pass' : 'FAIL',
+    ]);
+    para(doc, f, `Against the target sheet${d.targetSheet.name ? ` "${d.targetSheet.name}"` : ''}: ${check.failed.length === 0 ? 'meets every limit.' : `fails ${check.failed.length} limit${check.failed.length === 1 ? '' : 's'}.`}`);
+    if (rows.length) drawTable(doc, f, [{ title: 'Limit', width: 4 }, { title: 'Result', width: 1 }], rows);
+  }
+  if (d.justification) {
+    para(doc, f, 'Why it was signed off although it fails limits', { bold: true });
+    para(doc, f, d.justification);
+  }
   para(doc, f, `Signed by ${d.decidedBy.name} on ${stamp(d.signedAt ?? d.createdAt)} with engine ${d.engineVersion}.${d.supersedesId ? ` Supersedes decision ${d.supersedesId}.` : ''}`, { color: MUTED });
   para(doc, f, 'Rationale', { bold: true });
   para(doc, f, d.rationale);
@@ -186,6 +203,29 @@ function history(doc: PDFKit.PDFDocument, f: PacketFonts, data: PacketData): voi
   );
 }
 
+const TRAIL_WORDS = { accepted: 'accepted', sent_back: 'sent back with notes' } as const;
+
+/** Every request, answer and sign-off, oldest first, with their notes. */
+function trail(doc: PDFKit.PDFDocument, f: PacketFonts, data: PacketData): void {
+  heading(doc, f, 'Review trail');
+  const entries = data.review.trail;
+  if (entries.length === 0) return para(doc, f, 'Nobody has been asked to review this study yet.');
+  drawTable(
+    doc,
+    f,
+    [{ title: 'When', width: 1.4 }, { title: 'Who', width: 1.4 }, { title: 'What', width: 5 }],
+    entries.map((e) => [
+      stamp(e.at),
+      e.by.name,
+      e.kind === 'asked'
+        ? `asked ${e.reviewer.name} to review${e.message ? `: ${e.message}` : ''}`
+        : e.kind === 'answered'
+          ? `${TRAIL_WORDS[e.verdict]}${e.note ? `: ${e.note}` : ''}`
+          : `signed off ${e.label}${e.supersedesId ? ' (supersedes an earlier decision)' : ''}: ${e.rationale}${e.justification ? ` Why despite failed limits: ${e.justification}` : ''}`,
+    ]),
+  );
+}
+
 function exposure(doc: PDFKit.PDFDocument, f: PacketFonts, data: PacketData): void {
   heading(doc, f, 'RF exposure: far-field estimate');
   const e = data.exposure;
@@ -224,6 +264,7 @@ export function renderPacketPdf(data: PacketData): Promise<Buffer> {
   costs(doc, fonts, data);
   charts(doc, fonts, data);
   history(doc, fonts, data);
+  trail(doc, fonts, data);
   exposure(doc, fonts, data);
   stampPages(doc, fonts, data);
   doc.end();

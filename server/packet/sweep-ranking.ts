@@ -4,6 +4,7 @@
  * Reads sweep_designs in keyset batches so memory stays flat however large the sweep is.
  */
 import type { EntityManager } from 'typeorm';
+import { windowedDesignsCte } from '../services/sweep-scan-window.ts';
 import { DESIGN_COLUMNS } from '../../shared/sweep/columns.ts';
 import type { DesignFigures } from '../../shared/targets/figures.ts';
 import type { TargetSheet } from '../../shared/targets/sheet.ts';
@@ -49,6 +50,10 @@ export interface PacketSweepRanking {
   passing: number;
   /** One sentence: which sweep, how many designs, how many pass, how many are listed. */
   summary: string;
+  /** Over which steering angles the figures are worst cases, in words. */
+  basis: string;
+  /** Why this sweep: the one the signed decision chose from, or the most recent finished one. */
+  reason: 'decision' | 'latest';
   rows: PacketSweepDesign[];
 }
 
@@ -86,31 +91,68 @@ async function steerSpan(m: EntityManager, sweepId: string): Promise<SteerSpan |
   return Object.values(span).every(Number.isFinite) ? span : null;
 }
 
-function summaryText(name: string, finishedAt: string | null, designs: number, passing: number, listed: number, hasSheet: boolean): string {
+function summaryText(name: string, finishedAt: string | null, designs: number, passing: number, listed: number, hasSheet: boolean, reason: 'decision' | 'latest'): string {
   const finished = finishedAt ? ` (finished ${finishedAt.slice(0, 10)})` : '';
   const pass = hasSheet ? `, ${passing} passing the target sheet` : '; no target sheet is set, so none can pass';
   const shown = listed === designs ? 'All are listed.' : `The top ${listed} are listed.`;
-  return `Most recent finished sweep "${name}"${finished}: ${designs} design${designs === 1 ? '' : 's'} in the sweep${pass}. ${shown}`;
+  const which = reason === 'decision' ? 'The signed design’s sweep' : 'Most recent finished sweep';
+  return `${which} "${name}"${finished}: ${designs} design${designs === 1 ? '' : 's'} in the sweep${pass}. ${shown}`;
+}
+
+const deg = (x: number) => `${Math.round(x * 100) / 100}°`;
+
+/** The same words as the trade table's judgement: the sweep's own angles, inside the sheet's scan range when it sets one. */
+function basisText(sheet: TargetSheet | null, span: SteerSpan | null): string {
+  const az = sheet?.scanAzDeg;
+  const el = sheet?.scanElDeg;
+  const swept = span ? `azimuth ${deg(span.azMinDeg)} to ${deg(span.azMaxDeg)}, elevation ${deg(span.elMinDeg)} to ${deg(span.elMaxDeg)}` : 'none';
+  if (!az && !el) return `every steering angle each design was computed at (${swept}); the target sheet sets no scan range`;
+  const window = [az ? `azimuth ${deg(az.min)} to ${deg(az.max)}` : null, el ? `elevation ${deg(el.min)} to ${deg(el.max)}` : null].filter(Boolean).join(', ');
+  return `the steering angles each design was computed at (${swept}) that lie inside the target sheet's scan range (${window})`;
 }
 
 const SELECT = DESIGN_COLUMNS.map((c) => `${c.column} AS "${c.field}"`).join(', ');
 
-/** Ranks the newest sweep of `studyId` that finished its work ('done'); null when the study has none. */
-export async function rankLatestSweep(m: EntityManager, studyId: string, sheet: TargetSheet | null): Promise<PacketSweepRanking | null> {
-  const [sweep] = (await m.query(
-    `SELECT id, name, finished_at FROM sweeps WHERE study_id = $1 AND status = 'done'
-      ORDER BY finished_at DESC NULLS LAST, created_at DESC LIMIT 1`,
-    [studyId],
-  )) as { id: string; name: string; finished_at: Date | null }[];
+type SweepRow = { id: string; name: string; finished_at: Date | null; target_sheet_id: string | null };
+
+/**
+ * Ranks one sweep of `studyId`: `sweepId` (the signed decision's) when given and still there, else the newest one that
+ * finished its work ('done'); null when the study has none. Figures are worst cases over the points inside the sheet's
+ * scan range, as the trade table shows them.
+ * @param sheetOverride the sheet to judge against instead of the sweep's own (the one a signed decision was judged by)
+ */
+export async function rankLatestSweep(
+  m: EntityManager,
+  studyId: string,
+  sheetById: (sheetId: string | null) => TargetSheet | null,
+  sweepId: string | null = null,
+  sheetOverride?: TargetSheet | null,
+): Promise<PacketSweepRanking | null> {
+  const [chosen] = sweepId
+    ? ((await m.query(`SELECT id, name, finished_at, target_sheet_id FROM sweeps WHERE study_id = $1 AND id = $2`, [studyId, sweepId])) as SweepRow[])
+    : [];
+  const [sweep] = chosen
+    ? [chosen]
+    : ((await m.query(
+        `SELECT id, name, finished_at, target_sheet_id FROM sweeps WHERE study_id = $1 AND status = 'done'
+          ORDER BY finished_at DESC NULLS LAST, created_at DESC LIMIT 1`,
+        [studyId],
+      )) as SweepRow[]);
   if (!sweep) return null;
+  const reason = chosen ? 'decision' : 'latest';
+  // The sweep's designs are judged against the sheet it names (the study's first when it names none).
+  const sheet = sheetOverride !== undefined ? sheetOverride : sheetById(sweep.target_sheet_id);
+  const windowed = Boolean(sheet?.scanAzDeg || sheet?.scanElDeg);
   const span = await steerSpan(m, sweep.id);
   let top: Judged[] = [];
   let designs = 0;
   let passing = 0;
   for (let after = -1; ; ) {
+    const params: unknown[] = [sweep.id, after];
+    const prefix = windowed ? windowedDesignsCte(sheet?.scanAzDeg, sheet?.scanElDeg, params) : '';
     const batch = (await m.query(
-      `SELECT ${SELECT}, design FROM sweep_designs WHERE sweep_id = $1 AND design_index > $2 ORDER BY design_index LIMIT ${BATCH}`,
-      [sweep.id, after],
+      `${prefix}SELECT ${SELECT}, design FROM ${windowed ? 'windowed' : 'sweep_designs'} WHERE sweep_id = $1 AND design_index > $2 ORDER BY design_index LIMIT ${BATCH}`,
+      params,
     )) as DesignRowJson[];
     const judged = batch.map((r) => {
       const row = fromDesignRow(r, span);
@@ -129,7 +171,9 @@ export async function rankLatestSweep(m: EntityManager, studyId: string, sheet: 
     finishedAt,
     designs,
     passing,
-    summary: summaryText(sweep.name, finishedAt, designs, passing, top.length, sheet !== null),
+    summary: summaryText(sweep.name, finishedAt, designs, passing, top.length, sheet !== null, reason),
+    basis: basisText(sheet, span),
+    reason,
     rows: top.map(({ row, verdict }, i) => ({
       rank: i + 1,
       designIndex: row.designIndex,

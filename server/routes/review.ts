@@ -7,8 +7,16 @@ import { linkBase } from '../auth/links.ts';
 import type { AppContext } from '../context.ts';
 import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts';
 import { validate } from '../middleware/validate.ts';
-import { answerReviewRequest, getStudyReview, requestReview } from '../services/review-request-service.ts';
-import { ReviewAnswerSchema, ReviewRequestCreateSchema, type ReviewAnswer, type ReviewRequestCreate } from '../../shared/schemas/review.ts';
+import { searchDesigns } from '../services/design-search.ts';
+import { answerReviewRequest, getStudyReview, requestReview, waitingFor } from '../services/review-request-service.ts';
+import {
+  DesignSearchQuerySchema,
+  ReviewAnswerSchema,
+  ReviewRequestCreateSchema,
+  type DesignSearchQuery,
+  type ReviewAnswer,
+  type ReviewRequestCreate,
+} from '../../shared/schemas/review.ts';
 import { IdParamsSchema } from '../../shared/schemas/study.ts';
 import { commentsRouter } from './comments.ts';
 import { decisionsRouter } from './decisions.ts';
@@ -25,6 +33,14 @@ export function reviewRouter(ctx: AppContext): Router {
   router.post('/studies/:id/review-requests', requireRole('engineer'), id, validate({ body: ReviewRequestCreateSchema }), async (req, res) => {
     const body = req.body as ReviewRequestCreate;
     res.status(201).json(await requestReview(ctx, userOf(req), idOf(req), body, linkBase(ctx.config, req)));
+  });
+  // The signed-in member's open requests (the studies page's "waiting for me" list and the header's count).
+  router.get('/review-requests/waiting', requireAuth, async (req, res) => {
+    res.json(await waitingFor(ctx, userOf(req)));
+  });
+  // Every design of the study a reviewer can sign off: candidates and all designs of its finished sweeps.
+  router.get('/studies/:id/design-search', requireAuth, id, validate({ query: DesignSearchQuerySchema }), async (req, res) => {
+    res.json(await searchDesigns(ctx, userOf(req), idOf(req), req.query as unknown as DesignSearchQuery));
   });
   router.post('/review-requests/:id/answer', requireRole('reviewer'), id, validate({ body: ReviewAnswerSchema }), async (req, res) => {
     res.json(await answerReviewRequest(ctx, userOf(req), idOf(req), req.body as ReviewAnswer, linkBase(ctx.config, req)));

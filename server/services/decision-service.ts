@@ -7,17 +7,21 @@ import type { EntityManager } from 'typeorm';
 import type { AuthUser } from '../auth/types.ts';
 import type { AppContext } from '../context.ts';
 import { Decision, type FrozenMetrics } from '../entities/decision.ts';
-import { TargetSheetRow } from '../entities/target-sheet.ts';
 import { User } from '../entities/user.ts';
+import { fieldError } from '../auth/errors.ts';
 import { Conflict, Forbidden, NotFound } from '../errors.ts';
-import { designLabel } from '../packet/design-label.ts';
 import { scanDesign } from '../packet/design-scan.ts';
 import { findSweepDesign } from '../packet/sweep-design.ts';
 import { ENGINE_VERSION } from '../../shared/engine/index.ts';
 import type { Design } from '../../shared/schemas/design.ts';
-import type { DecisionCreate, DecisionPatch } from '../../shared/schemas/review.ts';
+import { parseSweepDesignId, type DecisionCreate, type DecisionPatch } from '../../shared/schemas/review.ts';
+import { checkAgainstSheet, type SheetCheck } from '../../shared/targets/check.ts';
+import type { DesignFigures } from '../../shared/targets/figures.ts';
 import type { TargetSheet } from '../../shared/targets/sheet.ts';
+import { designLabel } from '../../shared/trade/design-label.ts';
 import { audit } from './audit-service.ts';
+import { judgingSheet, type JudgingSheet } from './judging-sheet.ts';
+import { mailSignOff } from './sign-off-mail.ts';
 import { findInStudy, findStudyFor } from './study-access.ts';
 
 export type DecisionStatus = 'draft' | 'signed' | 'superseded';
@@ -45,6 +49,12 @@ export interface DecisionView {
   status: DecisionStatus;
   decidedBy: PersonRef;
   createdAt: string;
+  /** The target sheet it was judged against (frozen copy), and the outcome per limit. */
+  targetSheetId: string | null;
+  targetSheet: TargetSheet | null;
+  check: SheetCheck | null;
+  failedLimits: string[];
+  justification: string;
 }
 
 export const signedMessage = (id: string) =>
@@ -55,31 +65,55 @@ interface Resolved {
   design: Record<string, unknown>;
   metrics: FrozenMetrics;
   source: string | null;
+  targetSheetId: string | null;
+  targetSheet: Record<string, unknown> | null;
+  failedLimits: string[];
 }
 
-async function sheetOf(m: EntityManager, studyId: string): Promise<TargetSheet | null> {
-  return (await m.getRepository(TargetSheetRow).findOneBy({ studyId }))?.sheet ?? null;
-}
+const checkOf = (metrics: FrozenMetrics, sheet: TargetSheet | null): SheetCheck | null =>
+  sheet ? checkAgainstSheet(metrics.figures as unknown as DesignFigures, sheet) : null;
 
-/** Turns the request's design (an engine design or a sweep design id) into what the row freezes. */
-async function resolveDesign(m: EntityManager, studyId: string, design: DecisionCreate['design'], label?: string): Promise<Resolved> {
+/**
+ * Turns the request's design (an engine design or a sweep design id) into what the row freezes, judged against the
+ * sheet it is signed against (its figures over that sheet's scan range, and the limits it fails).
+ */
+async function resolveDesign(
+  m: EntityManager,
+  studyId: string,
+  design: DecisionCreate['design'],
+  label?: string,
+  targetSheetId?: string | null,
+): Promise<Resolved> {
+  const judged: JudgingSheet = await judgingSheet(m, studyId, {
+    targetSheetId,
+    sweepId: typeof design === 'string' ? parseSweepDesignId(design)?.sweepId : null,
+  });
+  const sheetPart = (metrics: FrozenMetrics) => ({
+    targetSheetId: judged.id,
+    targetSheet: judged.sheet as unknown as Record<string, unknown> | null,
+    failedLimits: checkOf(metrics, judged.sheet)?.failed ?? [],
+  });
   if (typeof design === 'string') {
-    const found = await findSweepDesign(m, studyId, design);
+    const found = await findSweepDesign(m, studyId, design, judged.sheet);
     if (!found) throw NotFound('sweep design');
-    return { label: label ?? found.label, design: found.params, metrics: found.metrics, source: design };
+    return { label: label ?? found.label, design: found.params, metrics: found.metrics, source: design, ...sheetPart(found.metrics) };
   }
-  const scan = scanDesign(design as Design, await sheetOf(m, studyId));
-  return {
-    label: label ?? designLabel(design),
-    design: design as unknown as Record<string, unknown>,
-    metrics: {
-      at: scan.at as unknown as Record<string, unknown>,
-      axis: scan.axis,
-      points: scan.points.map((p) => ({ ...p, metrics: p.metrics as unknown as Record<string, unknown> })),
-      figures: scan.figures as unknown as Record<string, unknown>,
-    },
-    source: null,
+  const scan = scanDesign(design as Design, judged.sheet);
+  const metrics: FrozenMetrics = {
+    at: scan.at as unknown as Record<string, unknown>,
+    axis: scan.axis,
+    points: scan.points.map((p) => ({ ...p, metrics: p.metrics as unknown as Record<string, unknown> })),
+    figures: scan.figures as unknown as Record<string, unknown>,
+    basis: scan.basis,
   };
+  return { label: label ?? designLabel(design), design: design as unknown as Record<string, unknown>, metrics, source: null, ...sheetPart(metrics) };
+}
+
+/** Signing a design that fails limits needs a written reason; the message names the limits. */
+function assertJustified(failedLimits: string[], justification: string): void {
+  if (failedLimits.length > 0 && justification.trim() === '') {
+    throw fieldError('justification', `must say why a design that fails ${failedLimits.join(', ')} of its target sheet is signed off`);
+  }
 }
 
 /** Serialises sign-offs of one study so two reviewers cannot both supersede the same decision. */
@@ -128,6 +162,11 @@ async function toViews(m: EntityManager, rows: Decision[]): Promise<DecisionView
       status: d.signedAt === null ? 'draft' : next ? 'superseded' : 'signed',
       decidedBy: byId.get(d.decidedById) ?? { id: d.decidedById, name: '(former member)', email: '' },
       createdAt: d.createdAt.toISOString(),
+      targetSheetId: d.targetSheetId,
+      targetSheet: d.targetSheet as unknown as TargetSheet | null,
+      check: checkOf(d.metrics, d.targetSheet as unknown as TargetSheet | null),
+      failedLimits: d.failedLimits,
+      justification: d.justification,
     };
   });
 }
@@ -139,13 +178,25 @@ export async function listDecisions(ctx: AppContext, user: AuthUser, studyId: st
   return toViews(ctx.db.manager, rows);
 }
 
-/** Records a decision; signed unless `sign: false`. Reviewers only (the route checks the role). */
-export async function createDecision(ctx: AppContext, user: AuthUser, studyId: string, input: DecisionCreate): Promise<DecisionView> {
-  await findStudyFor(ctx, user, studyId, 'read');
-  return ctx.db.transaction(async (m) => {
-    const resolved = await resolveDesign(m, studyId, input.design, input.label);
+/**
+ * Records a decision; signed unless `sign: false`. Reviewers only (the route checks the role). A signed one is mailed
+ * to the study's owner and everyone who took part in its review.
+ * @param baseUrl origin for the e-mail's links (server/auth/links.ts linkBase)
+ */
+export async function createDecision(
+  ctx: AppContext,
+  user: AuthUser,
+  studyId: string,
+  input: Omit<DecisionCreate, 'justification'> & { justification?: string },
+  baseUrl = '',
+): Promise<DecisionView> {
+  const justification = input.justification ?? '';
+  const study = await findStudyFor(ctx, user, studyId, 'read');
+  const view = await ctx.db.transaction(async (m) => {
+    const resolved = await resolveDesign(m, studyId, input.design, input.label, input.targetSheetId);
     let supersedesId: string | null = null;
     if (input.sign) {
+      assertJustified(resolved.failedLimits, justification);
       await lockStudy(m, studyId);
       supersedesId = (await currentSigned(m, studyId))?.id ?? null;
     }
@@ -158,6 +209,7 @@ export async function createDecision(ctx: AppContext, user: AuthUser, studyId: s
         engineVersion: ENGINE_VERSION,
         rationale: input.rationale,
         alternatives: input.alternatives,
+        justification,
         signedAt: input.sign ? new Date() : null,
         supersedesId,
       }),
@@ -165,9 +217,35 @@ export async function createDecision(ctx: AppContext, user: AuthUser, studyId: s
     if (input.sign) {
       await audit(ctx, user, 'decision.signed', { type: 'decision', id: saved.id }, { studyId, supersedesId, label: saved.label }, m);
     }
-    const [view] = await toViews(m, [saved]);
-    return view!;
+    const [one] = await toViews(m, [saved]);
+    return one!;
   });
+  if (view.status === 'signed') await mailSignOff(ctx, user, study, view, baseUrl);
+  return view;
+}
+
+/** What signing `design` would record, without recording it: label, figures and their basis, the sheet and its check. */
+export interface DecisionPreview {
+  label: string;
+  design: Record<string, unknown>;
+  metrics: FrozenMetrics;
+  targetSheetId: string | null;
+  targetSheet: TargetSheet | null;
+  check: SheetCheck | null;
+  failedLimits: string[];
+}
+
+/** The confirmation dialog's facts: the same resolution a sign-off freezes, so what is confirmed is what is signed. */
+export async function previewDecision(
+  ctx: AppContext,
+  user: AuthUser,
+  studyId: string,
+  input: { design: DecisionCreate['design']; label?: string; targetSheetId?: string | null },
+): Promise<DecisionPreview> {
+  await findStudyFor(ctx, user, studyId, 'read');
+  const r = await resolveDesign(ctx.db.manager, studyId, input.design, input.label, input.targetSheetId);
+  const sheet = r.targetSheet as unknown as TargetSheet | null;
+  return { label: r.label, design: r.design, metrics: r.metrics, targetSheetId: r.targetSheetId, targetSheet: sheet, check: checkOf(r.metrics, sheet), failedLimits: r.failedLimits };
 }
 
 /** The decision if its study is readable; another team's id is a 404. */
@@ -187,31 +265,38 @@ function assertChangeable(user: AuthUser, d: Decision): void {
   if (d.decidedById !== user.id) throw Forbidden('only the reviewer who drafted this decision may change it');
 }
 
-export async function patchDecision(ctx: AppContext, user: AuthUser, id: string, patch: DecisionPatch): Promise<DecisionView> {
+export async function patchDecision(ctx: AppContext, user: AuthUser, id: string, patch: DecisionPatch, baseUrl = ''): Promise<DecisionView> {
   const draft = await decisionFor(ctx, user, id);
   assertChangeable(user, draft);
-  return ctx.db.transaction(async (m) => {
-    if (patch.design !== undefined) Object.assign(draft, await resolveDesign(m, draft.studyId, patch.design, patch.label));
+  const view = await ctx.db.transaction(async (m) => {
+    const sheetId = patch.targetSheetId !== undefined ? patch.targetSheetId : draft.targetSheetId;
+    const again = (design: DecisionCreate['design']) => resolveDesign(m, draft.studyId, design, patch.label ?? draft.label, sheetId);
+    if (patch.design !== undefined) Object.assign(draft, await resolveDesign(m, draft.studyId, patch.design, patch.label, sheetId));
+    else if (patch.targetSheetId !== undefined) Object.assign(draft, await again(draft.source ?? (draft.design as unknown as Design)));
     else if (patch.label !== undefined) draft.label = patch.label;
     if (patch.rationale !== undefined) draft.rationale = patch.rationale;
     if (patch.alternatives !== undefined) draft.alternatives = patch.alternatives;
+    if (patch.justification !== undefined) draft.justification = patch.justification;
     if (patch.sign) {
       await lockStudy(m, draft.studyId);
-      draft.supersedesId = (await currentSigned(m, draft.studyId))?.id ?? null;
-      draft.signedAt = new Date();
       // Metrics are frozen with the engine that signs them.
       if (patch.design === undefined && draft.engineVersion !== ENGINE_VERSION) {
-        Object.assign(draft, await resolveDesign(m, draft.studyId, draft.source ?? (draft.design as unknown as Design), draft.label));
+        Object.assign(draft, await again(draft.source ?? (draft.design as unknown as Design)));
       }
+      assertJustified(draft.failedLimits, draft.justification);
+      draft.supersedesId = (await currentSigned(m, draft.studyId))?.id ?? null;
+      draft.signedAt = new Date();
       draft.engineVersion = ENGINE_VERSION;
     }
     const saved = await m.getRepository(Decision).save(draft);
     if (patch.sign) {
       await audit(ctx, user, 'decision.signed', { type: 'decision', id: saved.id }, { studyId: saved.studyId, supersedesId: saved.supersedesId, label: saved.label }, m);
     }
-    const [view] = await toViews(m, [saved]);
-    return view!;
+    const [one] = await toViews(m, [saved]);
+    return one!;
   });
+  if (patch.sign) await mailSignOff(ctx, user, await findStudyFor(ctx, user, view.studyId, 'read'), view, baseUrl);
+  return view;
 }
 
 export async function deleteDecision(ctx: AppContext, user: AuthUser, id: string): Promise<void> {

@@ -11,7 +11,7 @@ import { scanDesign } from '../packet/design-scan.ts';
 import { packetOrder, rankLatestSweep, type PacketSweepRanking } from '../packet/sweep-ranking.ts';
 import { ENGINE_VERSION } from '../../shared/engine/index.ts';
 import { DesignSchema } from '../../shared/schemas/design.ts';
-import type { StudyReview } from '../../shared/schemas/review.ts';
+import { parseSweepDesignId, type StudyReview } from '../../shared/schemas/review.ts';
 import { exposureEstimate, REFERENCE_LEVEL_SOURCE, RF_EXPOSURE_CAUTION, type ExposureEstimate } from '../../shared/safety/index.ts';
 import { scanAngleDeg, type DesignFigures } from '../../shared/targets/figures.ts';
 import { LIMIT_KEYS, LIMIT_LABELS, type LimitKey, type TargetSheet } from '../../shared/targets/sheet.ts';
@@ -54,7 +54,8 @@ export interface PacketData {
   generatedAt: string;
   engineVersion: string;
   job: string;
-  targetSheet: { name: string | null; preset: string | null; limits: PacketLimit[] } | null;
+  /** The sheet the signed decision was judged against (judgedDecision), else the study's first sheet. */
+  targetSheet: { name: string | null; preset: string | null; limits: PacketLimit[]; judgedDecision: boolean } | null;
   rankObjective: string;
   ranked: PacketRankedDesign[];
   /** The study's most recent finished sweep, ranked the same way; null when it has none. */
@@ -101,8 +102,10 @@ function jobParagraph(description: string, sheetName: string | null, limits: Pac
 }
 
 /** Candidates as trade rows (each evaluated across the scan), passing ones first, then by the default objective. */
-function rankCandidates(candidates: Candidate[], sheet: TargetSheet | null): { rows: PacketRankedDesign[] } {
+function rankCandidates(candidates: Candidate[], sheetOfCandidate: (c: Candidate) => TargetSheet | null): { rows: PacketRankedDesign[] } {
   const rows = candidates.flatMap((c, i) => {
+    // Each candidate is judged against the sheet it names.
+    const sheet = sheetOfCandidate(c);
     // Stored designs are parsed on the way in; re-parse so an older row missing a default cannot break the packet.
     const parsed = DesignSchema.safeParse(c.design);
     if (!parsed.success) return [];
@@ -174,21 +177,30 @@ function exposureBasisOf(
 export async function buildPacket(ctx: AppContext, user: AuthUser, studyId: string, options: PacketOptions = {}): Promise<PacketData> {
   const study = await findStudyFor(ctx, user, studyId, 'read');
   const team = await ctx.db.getRepository(Team).findOneBy({ id: study.teamId });
-  const sheetRow = await ctx.db.getRepository(TargetSheetRow).findOneBy({ studyId });
+  const sheetRows = await ctx.db.getRepository(TargetSheetRow).find({ where: { studyId }, order: { position: 'ASC', createdAt: 'ASC', id: 'ASC' } });
+  const sheetRow = sheetRows[0] ?? null;
   const sheet = sheetRow?.sheet ?? null;
+  const sheetById = (id: string | null) => (id ? sheetRows.find((r) => r.id === id)?.sheet : undefined) ?? sheet;
   const candidates = await ctx.db.getRepository(Candidate).find({ where: { studyId }, order: { position: 'ASC', createdAt: 'ASC' } });
   const history = await listDecisions(ctx, user, studyId);
   const decision = history.find((d) => d.status === 'signed') ?? null;
   const limits = sheet ? sheetLimits(sheet) : [];
-  const ranked = rankCandidates(candidates, sheet).rows;
-  const sweepRanked = await rankLatestSweep(ctx.db.manager, studyId, sheet);
+  const ranked = rankCandidates(candidates, (c) => sheetById(c.targetSheetId)).rows;
+  // The decision's own sweep and sheet: the packet describes what was signed, not whatever is newest.
+  const decisionSweep = decision?.source ? (parseSweepDesignId(decision.source)?.sweepId ?? null) : null;
+  const judgedSheet = decision?.targetSheet ?? undefined;
+  const sweepRanked = await rankLatestSweep(ctx.db.manager, studyId, sheetById, decisionSweep, judgedSheet);
   const basis = exposureBasisOf(decision, [...ranked, ...(sweepRanked?.rows ?? [])]);
   return {
     study: { id: study.id, name: study.name, description: study.description, teamName: team?.name ?? '' },
     generatedAt: new Date().toISOString(),
     engineVersion: ENGINE_VERSION,
     job: jobParagraph(study.description, sheet?.name ?? null, limits, candidates.length),
-    targetSheet: sheet ? { name: sheet.name ?? null, preset: sheetRow?.preset ?? null, limits } : null,
+    targetSheet: judgedSheet
+      ? { name: judgedSheet.name ?? null, preset: decision?.targetSheetId === sheetRow?.id ? (sheetRow?.preset ?? null) : null, limits: sheetLimits(judgedSheet), judgedDecision: true }
+      : sheet
+        ? { name: sheet.name ?? null, preset: sheetRow?.preset ?? null, limits, judgedDecision: false }
+        : null,
     rankObjective: RANK_OBJECTIVES[0]!.label,
     ranked,
     sweepRanked,

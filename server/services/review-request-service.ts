@@ -1,6 +1,7 @@
 /**
- * Review requests: an engineer asks reviewers to review a study, each reviewer answers approved or
- * changes requested. The study's review state is derived from these answers and the signed decisions.
+ * Review requests: an engineer asks reviewers to review a study, each reviewer accepts it or sends it back with
+ * notes. The study's review state is derived from these answers and the signed decisions; every answer is kept
+ * (review_answers) so the trail shows the whole review, sign-offs included.
  */
 import type { AuthUser } from '../auth/types.ts';
 import { fieldError } from '../auth/errors.ts';
@@ -9,7 +10,16 @@ import { ReviewRequest } from '../entities/review-request.ts';
 import type { Study } from '../entities/study.ts';
 import { User } from '../entities/user.ts';
 import { Forbidden } from '../errors.ts';
-import type { ReviewAnswer, ReviewRequestCreate, ReviewRequestView, StudyReview, StudyReviewState } from '../../shared/schemas/review.ts';
+import type {
+  ReviewAnswer,
+  ReviewRequestCreate,
+  ReviewRequestView,
+  ReviewTrailEntry,
+  ReviewVerdict,
+  StudyReview,
+  StudyReviewState,
+  WaitingRequest,
+} from '../../shared/schemas/review.ts';
 import { audit } from './audit-service.ts';
 import { findInStudy, findStudyFor } from './study-access.ts';
 
@@ -18,8 +28,8 @@ type RequestFacts = Pick<ReviewRequest, 'reviewerId' | 'state' | 'createdAt' | '
 /**
  * The study's state from its requests and its latest signature time (pure):
  * - signed off: a decision is signed and nobody has been asked since;
- * - changes requested: in the current round some reviewer's latest answer asks for changes;
- * - in review: someone has been asked in the current round (answers pending or all approved);
+ * - sent back: in the current round some reviewer's latest answer sends it back;
+ * - in review: someone has been asked in the current round (answers pending or all accepted);
  * - draft: nobody asked yet.
  */
 export function studyReviewState(requests: readonly RequestFacts[], lastSignedAt: Date | null): StudyReviewState {
@@ -27,7 +37,7 @@ export function studyReviewState(requests: readonly RequestFacts[], lastSignedAt
   if (round.length === 0) return lastSignedAt ? 'signed_off' : 'draft';
   const latest = new Map<string, RequestFacts>();
   for (const r of [...round].sort((a, b) => a.createdAt.getTime() - b.createdAt.getTime())) latest.set(r.reviewerId, r);
-  return [...latest.values()].some((r) => r.state === 'changes_requested') ? 'changes_requested' : 'in_review';
+  return [...latest.values()].some((r) => r.state === 'sent_back') ? 'sent_back' : 'in_review';
 }
 
 async function people(ctx: AppContext, teamId: string): Promise<Map<string, User>> {
@@ -50,10 +60,8 @@ function view(r: ReviewRequest, byId: Map<string, User>): ReviewRequestView {
   };
 }
 
-/** Who was asked, who answered, and the derived state. */
-export async function getStudyReview(ctx: AppContext, user: AuthUser, studyId: string): Promise<StudyReview> {
-  await findStudyFor(ctx, user, studyId, 'read');
-  const requests = await ctx.db.getRepository(ReviewRequest).find({ where: { studyId }, order: { createdAt: 'DESC' } });
+/** The study's latest signed decision that nothing supersedes, if any. */
+async function lastSigned(ctx: AppContext, studyId: string): Promise<{ id: string; signed_at: Date } | null> {
   const [signed] = (await ctx.db.query(
     `SELECT d.id, d.signed_at FROM decisions d
       WHERE d.study_id = $1 AND d.signed_at IS NOT NULL
@@ -61,16 +69,121 @@ export async function getStudyReview(ctx: AppContext, user: AuthUser, studyId: s
       ORDER BY d.signed_at DESC LIMIT 1`,
     [studyId],
   )) as { id: string; signed_at: Date }[];
+  return signed ?? null;
+}
+
+const person = (byId: Map<string, User>, id: string) => ({ id, name: byId.get(id)?.name ?? '(former member)' });
+
+/** Requests, every answer and every sign-off of the study, oldest first. */
+async function reviewTrail(ctx: AppContext, studyId: string, requests: ReviewRequest[], byId: Map<string, User>): Promise<ReviewTrailEntry[]> {
+  const answers = (await ctx.db.query(
+    `SELECT request_id, reviewer_id, verdict, note, created_at FROM review_answers WHERE study_id = $1`,
+    [studyId],
+  )) as { request_id: string; reviewer_id: string; verdict: ReviewVerdict; note: string; created_at: Date }[];
+  const signed = (await ctx.db.query(
+    `SELECT id, decided_by_id, label, rationale, justification, supersedes_id, signed_at FROM decisions
+      WHERE study_id = $1 AND signed_at IS NOT NULL`,
+    [studyId],
+  )) as { id: string; decided_by_id: string; label: string; rationale: string; justification: string; supersedes_id: string | null; signed_at: Date }[];
+  const entries: ReviewTrailEntry[] = [
+    ...requests.map((r): ReviewTrailEntry => ({
+      kind: 'asked', at: r.createdAt.toISOString(), requestId: r.id, by: person(byId, r.requestedById), reviewer: person(byId, r.reviewerId), message: r.message,
+    })),
+    ...answers.map((a): ReviewTrailEntry => ({
+      kind: 'answered', at: a.created_at.toISOString(), requestId: a.request_id, by: person(byId, a.reviewer_id), verdict: a.verdict, note: a.note,
+    })),
+    ...signed.map((d): ReviewTrailEntry => ({
+      kind: 'signed', at: d.signed_at.toISOString(), decisionId: d.id, by: person(byId, d.decided_by_id), label: d.label,
+      rationale: d.rationale, justification: d.justification, supersedesId: d.supersedes_id,
+    })),
+  ];
+  // Same instant: ask before answer before sign-off, the order they can happen in.
+  const rank = { asked: 0, answered: 1, signed: 2 } as const;
+  return entries.sort((a, b) => a.at.localeCompare(b.at) || rank[a.kind] - rank[b.kind]);
+}
+
+/** Who was asked, who answered, the derived state, and the whole trail. */
+export async function getStudyReview(ctx: AppContext, user: AuthUser, studyId: string): Promise<StudyReview> {
+  await findStudyFor(ctx, user, studyId, 'read');
+  const requests = await ctx.db.getRepository(ReviewRequest).find({ where: { studyId }, order: { createdAt: 'DESC' } });
+  const signed = await lastSigned(ctx, studyId);
   const lastSignedAt = signed?.signed_at ?? null;
   const round = requests.filter((r) => lastSignedAt === null || r.createdAt > lastSignedAt);
   const byId = await people(ctx, user.teamId);
   return {
     state: studyReviewState(requests, lastSignedAt),
     requests: round.map((r) => view(r, byId)),
+    allRequests: requests.map((r) => view(r, byId)),
+    trail: await reviewTrail(ctx, studyId, requests, byId),
     asked: new Set(round.map((r) => r.reviewerId)).size,
     answered: new Set(round.filter((r) => r.state !== 'asked').map((r) => r.reviewerId)).size,
     signedDecision: signed ? { id: signed.id, signedAt: signed.signed_at.toISOString() } : null,
   };
+}
+
+/** The app path of a request on its study's Review tab; the e-mail links to the same place. */
+export const requestPath = (studyId: string, requestId: string) => `/studies/${studyId}?request=${requestId}#review`;
+
+/** The signed-in user's open requests on studies they can still read, oldest first. */
+export async function waitingFor(ctx: AppContext, user: AuthUser): Promise<WaitingRequest[]> {
+  const rows = (await ctx.db.query(
+    `SELECT r.id, r.study_id, s.name AS study_name, o.name AS owner_name, r.requested_by_id, b.name AS by_name, r.message, r.created_at
+       FROM review_requests r
+       JOIN studies s ON s.id = r.study_id AND s.team_id = $2 AND s.archived_at IS NULL
+       JOIN users o ON o.id = s.owner_id
+       LEFT JOIN users b ON b.id = r.requested_by_id
+      WHERE r.reviewer_id = $1 AND r.state = 'asked'
+      ORDER BY r.created_at`,
+    [user.id, user.teamId],
+  )) as { id: string; study_id: string; study_name: string; owner_name: string; requested_by_id: string; by_name: string | null; message: string; created_at: Date }[];
+  const readable = await Promise.all(rows.map((r) => findStudyFor(ctx, user, r.study_id, 'read').then(() => true, () => false)));
+  return rows
+    .filter((_, i) => readable[i])
+    .map((r) => ({
+      id: r.id,
+      study: { id: r.study_id, name: r.study_name, ownerName: r.owner_name },
+      requestedBy: { id: r.requested_by_id, name: r.by_name ?? '(former member)' },
+      message: r.message,
+      createdAt: r.created_at.toISOString(),
+      link: requestPath(r.study_id, r.id),
+    }));
+}
+
+export interface StudyReviewSummary {
+  reviewState: StudyReviewState;
+  /** Latest review activity (asked, answered, commented, signed), or null. */
+  reviewActivityAt: string | null;
+}
+
+/** Review state and latest review activity of each study in `studyIds` (for the studies list), in three queries. */
+export async function reviewSummaries(ctx: AppContext, studyIds: string[]): Promise<Map<string, StudyReviewSummary>> {
+  const out = new Map<string, StudyReviewSummary>();
+  if (studyIds.length === 0) return out;
+  const requests = (await ctx.db.query(
+    `SELECT study_id, reviewer_id AS "reviewerId", state, created_at AS "createdAt", answered_at AS "answeredAt" FROM review_requests WHERE study_id = ANY($1)`,
+    [studyIds],
+  )) as (RequestFacts & { study_id: string })[];
+  const signed = (await ctx.db.query(
+    `SELECT study_id, max(signed_at) AS at FROM decisions WHERE study_id = ANY($1) AND signed_at IS NOT NULL GROUP BY study_id`,
+    [studyIds],
+  )) as { study_id: string; at: Date }[];
+  const activity = (await ctx.db.query(
+    `SELECT study_id, max(at) AS at FROM (
+        SELECT study_id, greatest(created_at, answered_at) AS at FROM review_requests WHERE study_id = ANY($1)
+        UNION ALL SELECT study_id, created_at FROM comments WHERE study_id = ANY($1)
+        UNION ALL SELECT study_id, greatest(created_at, signed_at) FROM decisions WHERE study_id = ANY($1)
+      ) a GROUP BY study_id`,
+    [studyIds],
+  )) as { study_id: string; at: Date | null }[];
+  const signedAt = new Map(signed.map((r) => [r.study_id, r.at]));
+  const activeAt = new Map(activity.map((r) => [r.study_id, r.at]));
+  for (const id of studyIds) {
+    out.set(id, {
+      reviewState: studyReviewState(requests.filter((r) => r.study_id === id), signedAt.get(id) ?? null),
+      reviewActivityAt: activeAt.get(id)?.toISOString() ?? null,
+    });
+  }
+  return out;
 }
 
 /**
@@ -113,11 +226,11 @@ async function mailReviewer(ctx: AppContext, from: AuthUser, study: Study, r: Re
     ctx.log.warn({ requestId: r.id }, 'review request not mailed: mail is not configured');
     return;
   }
-  const link = `${baseUrl}/studies/${study.id}?request=${r.id}#review`;
+  const link = `${baseUrl}${requestPath(study.id, r.id)}`;
   const text =
     `${from.name} asks you to review the study "${study.name}".\n\n` +
-    (r.message ? `${r.message}\n\n` : '') +
-    `Open the study's review tab to comment, approve or ask for changes, and to sign off:\n${link}\n`;
+    (r.message ? `What to look at:\n${r.message}\n\n` : '') +
+    `Open the request on the study's Review tab to comment, accept the study or send it back with notes, and to sign off:\n${link}\n`;
   try {
     await ctx.mailer.send({ to: to.email, subject: `Review requested: "${study.name}"`, text, teamId: study.teamId });
   } catch (err) {
@@ -134,16 +247,21 @@ export async function answerReviewRequest(ctx: AppContext, user: AuthUser, id: s
   request.answeredAt = new Date();
   const saved = await ctx.db.transaction(async (m) => {
     const row = await m.getRepository(ReviewRequest).save(request);
+    await m.query(
+      `INSERT INTO review_answers (request_id, study_id, reviewer_id, verdict, note, created_at) VALUES ($1, $2, $3, $4, $5, $6)`,
+      [row.id, row.studyId, user.id, answer.state, answer.note, request.answeredAt],
+    );
     await audit(ctx, user, 'review.answered', { type: 'review_request', id }, { studyId: study.id, state: answer.state }, m);
     return row;
   });
   const byId = await people(ctx, user.teamId);
   const requester = byId.get(saved.requestedById);
   if (requester && ctx.mailer) {
-    const words = answer.state === 'approved' ? 'approved' : 'asked for changes to';
+    const words = answer.state === 'accepted' ? 'accepted' : 'sent back with notes';
     const text = `${user.name} ${words} the study "${study.name}".\n\n${answer.note ? `${answer.note}\n\n` : ''}${baseUrl}/studies/${study.id}#review\n`;
+    const subject = answer.state === 'accepted' ? `Accepted: "${study.name}"` : `Sent back with notes: "${study.name}"`;
     await ctx.mailer
-      .send({ to: requester.email, subject: `Review answered: "${study.name}"`, text, teamId: study.teamId })
+      .send({ to: requester.email, subject, text, teamId: study.teamId })
       .catch((err: unknown) => ctx.log.error({ err, requestId: id }, 'review answer e-mail failed'));
   }
   return view(saved, byId);

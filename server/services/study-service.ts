@@ -19,6 +19,7 @@ import {
   type SweepDefinition,
 } from '../../shared/schemas/study.ts';
 import { audit } from './audit-service.ts';
+import { reviewSummaries } from './review-request-service.ts';
 import { findStudyFor, studyVisibilityWhere } from './study-access.ts';
 
 /** The caller's visible studies, newest change first; archived ones only when asked. */
@@ -47,10 +48,17 @@ export async function listStudies(
     {},
   );
   const rows: StudyListItem[] = await ctx.db.query(sql, params);
-  return rows.map((r) => ({
-    ...r,
-    targetSheetName: r.targetSheetName ?? (r.targetSheetPreset ? (findPreset(r.targetSheetPreset)?.name ?? null) : null),
-  }));
+  const review = await reviewSummaries(ctx, rows.map((r) => r.id));
+  return rows.map((r) => {
+    const summary = review.get(r.id);
+    const activity = summary?.reviewActivityAt ?? null;
+    return {
+      ...r,
+      targetSheetName: r.targetSheetName ?? (r.targetSheetPreset ? (findPreset(r.targetSheetPreset)?.name ?? null) : null),
+      reviewState: summary?.reviewState ?? 'draft',
+      lastChangeAt: activity && activity > new Date(r.updatedAt).toISOString() ? activity : new Date(r.updatedAt).toISOString(),
+    };
+  });
 }
 
 /** One study as the list shows it, after checking the caller may read it. */

@@ -54,16 +54,23 @@ export const ReviewRequestCreateSchema = z
   .strict();
 export type ReviewRequestCreate = z.output<typeof ReviewRequestCreateSchema>;
 
+/**
+ * A reviewer's verdict on a request: accept the study as it stands, or send it back with notes saying what to change.
+ * The words are ours and the same in the UI, the API, the e-mails and the packet.
+ */
+export const REVIEW_VERDICTS = ['accepted', 'sent_back'] as const;
+export type ReviewVerdict = (typeof REVIEW_VERDICTS)[number];
+
 export const ReviewAnswerSchema = z
   .object(
     {
-      state: z.enum(['approved', 'changes_requested'], { error: 'must be "approved" or "changes_requested"' }),
+      state: z.enum(REVIEW_VERDICTS, { error: 'must be "accepted" or "sent_back"' }),
       note: z.string({ error: 'must be text' }).trim().max(5000, 'must be at most 5000 characters').default(''),
     },
     { error: 'must be {state, note?}' },
   )
   .strict()
-  .refine((a) => a.state !== 'changes_requested' || a.note.length > 0, { message: 'must say which changes are needed', path: ['note'] });
+  .refine((a) => a.state !== 'sent_back' || a.note.length > 0, { message: 'must say what to change when sending it back', path: ['note'] });
 export type ReviewAnswer = z.output<typeof ReviewAnswerSchema>;
 
 export const AlternativeSchema = z
@@ -82,6 +89,8 @@ const rationale = z
   .trim()
   .min(1, `must be text of 1 to ${RATIONALE_MAX} characters`)
   .max(RATIONALE_MAX, `must be text of 1 to ${RATIONALE_MAX} characters`);
+export const JUSTIFICATION_MAX = 5000;
+const justificationText = z.string({ error: 'must be text' }).trim().max(JUSTIFICATION_MAX, `must be at most ${JUSTIFICATION_MAX} characters`);
 const alternatives = z.array(AlternativeSchema, { error: 'must be a list of {label, reason}' }).max(50, 'must hold at most 50 alternatives');
 
 const SWEEP_DESIGN_ID = /^([0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}):(\d{1,9})$/i;
@@ -112,6 +121,10 @@ export const DecisionCreateSchema = z
       label: z.string({ error: 'must be text' }).trim().min(1, 'must be text of 1 to 300 characters').max(300, 'must be text of 1 to 300 characters').optional(),
       rationale,
       alternatives: alternatives.default([]),
+      /** Why sign a design that fails target-sheet limits; required when signing one that fails any. */
+      justification: justificationText.default(''),
+      /** The target sheet to judge it against; default: the sweep's or candidate's sheet, else the study's first. */
+      targetSheetId: z.uuid({ error: 'must be a target sheet id (uuid)' }).nullable().optional(),
       /** false keeps it as an editable draft; a signed decision can never change. */
       sign: z.boolean({ error: 'must be true or false' }).default(true),
     },
@@ -121,6 +134,19 @@ export const DecisionCreateSchema = z
 export type DecisionCreate = z.output<typeof DecisionCreateSchema>;
 export type DecisionCreateInput = z.input<typeof DecisionCreateSchema>;
 
+/** POST /api/studies/:id/decisions/check: what signing this design would record (nothing is written). */
+export const DecisionCheckSchema = z
+  .object(
+    {
+      design: DecisionDesignSchema,
+      label: z.string({ error: 'must be text' }).trim().min(1, 'must be text of 1 to 300 characters').max(300, 'must be text of 1 to 300 characters').optional(),
+      targetSheetId: z.uuid({ error: 'must be a target sheet id (uuid)' }).nullable().optional(),
+    },
+    { error: 'must be {design, label?, targetSheetId?}' },
+  )
+  .strict();
+export type DecisionCheck = z.output<typeof DecisionCheckSchema>;
+
 /** Changes to a draft decision. Signed decisions refuse every change. */
 export const DecisionPatchSchema = z
   .object(
@@ -129,6 +155,8 @@ export const DecisionPatchSchema = z
       label: z.string({ error: 'must be text' }).trim().min(1, 'must be text of 1 to 300 characters').max(300, 'must be text of 1 to 300 characters').optional(),
       rationale: rationale.optional(),
       alternatives: alternatives.optional(),
+      justification: justificationText.optional(),
+      targetSheetId: z.uuid({ error: 'must be a target sheet id (uuid)' }).nullable().optional(),
       sign: z.literal(true, { error: 'must be true (signing cannot be undone)' }).optional(),
     },
     { error: 'must be an object of changes' },
@@ -136,9 +164,10 @@ export const DecisionPatchSchema = z
   .strict();
 export type DecisionPatch = z.output<typeof DecisionPatchSchema>;
 
-export const STUDY_REVIEW_STATES = ['draft', 'in_review', 'changes_requested', 'signed_off'] as const;
+export const STUDY_REVIEW_STATES = ['draft', 'in_review', 'sent_back', 'signed_off'] as const;
 export type StudyReviewState = (typeof STUDY_REVIEW_STATES)[number];
-export type ReviewRequestState = 'asked' | 'approved' | 'changes_requested';
+export const REVIEW_REQUEST_STATES = ['asked', ...REVIEW_VERDICTS] as const;
+export type ReviewRequestState = (typeof REVIEW_REQUEST_STATES)[number];
 
 /** A review request as the API answers it. */
 export interface ReviewRequestView {
@@ -153,13 +182,75 @@ export interface ReviewRequestView {
   answeredAt: string | null;
 }
 
+/** One step of a study's review trail, oldest first: who asked, who answered, who signed off, with their words. */
+export type ReviewTrailEntry =
+  | { kind: 'asked'; at: string; requestId: string; by: { id: string; name: string }; reviewer: { id: string; name: string }; message: string }
+  | { kind: 'answered'; at: string; requestId: string; by: { id: string; name: string }; verdict: ReviewVerdict; note: string }
+  | { kind: 'signed'; at: string; decisionId: string; by: { id: string; name: string }; label: string; rationale: string; justification: string; supersedesId: string | null };
+
 /** GET /api/studies/:id/review. */
 export interface StudyReview {
   state: StudyReviewState;
   /** Requests of the current round (since the last sign-off), newest first. */
   requests: ReviewRequestView[];
+  /** Every request of every round, newest first (a sign-off closes a round but never hides it). */
+  allRequests: ReviewRequestView[];
+  /** Requests, answers and sign-offs in the order they happened. */
+  trail: ReviewTrailEntry[];
   asked: number;
   answered: number;
   /** The current signed decision's id and time, if any. */
   signedDecision: { id: string; signedAt: string } | null;
+}
+
+/** GET /api/review-requests/waiting: the signed-in reviewer's open requests, oldest first. */
+export interface WaitingRequest {
+  id: string;
+  study: { id: string; name: string; ownerName: string };
+  requestedBy: { id: string; name: string };
+  message: string;
+  createdAt: string;
+  /** The app path that opens the request on the study's Review tab (the same as the e-mail's link). */
+  link: string;
+}
+
+export const DESIGN_SEARCH_MAX = 50;
+
+/** GET /api/studies/:id/design-search?q=…: candidates and sweep designs of the study to sign off. */
+export const DesignSearchQuerySchema = z
+  .object(
+    {
+      q: z.string({ error: 'must be text' }).trim().max(200, 'must be at most 200 characters').default(''),
+      limit: z.coerce
+        .number({ error: `must be an integer from 1 to ${DESIGN_SEARCH_MAX}` })
+        .int(`must be an integer from 1 to ${DESIGN_SEARCH_MAX}`)
+        .min(1, `must be an integer from 1 to ${DESIGN_SEARCH_MAX}`)
+        .max(DESIGN_SEARCH_MAX, `must be an integer from 1 to ${DESIGN_SEARCH_MAX}`)
+        .default(20),
+    },
+    { error: 'must be {q?, limit?}' },
+  )
+  .strict();
+export type DesignSearchQuery = z.output<typeof DesignSearchQuerySchema>;
+
+/** One design a reviewer can sign off. */
+export interface DesignSearchHit {
+  /** 'candidate:<id>' or 'sweep:<sweep id>:<design index>'. */
+  key: string;
+  kind: 'candidate' | 'sweep';
+  /** What the decision is posted with: a candidate's design object or a sweep design id. */
+  design: Record<string, unknown> | string;
+  /** Leads with the design number (or the candidate name), then the design's short description. */
+  label: string;
+  designIndex: number | null;
+  sweep: { id: string; name: string } | null;
+  candidate: { id: string; name: string } | null;
+  /** The short description alone (shared/trade/design-label.ts). */
+  description: string;
+}
+
+export interface DesignSearchResult {
+  hits: DesignSearchHit[];
+  /** Sweep designs matched in all (hits holds the first `limit`). */
+  total: number;
 }

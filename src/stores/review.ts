@@ -5,7 +5,17 @@
 import { defineStore } from 'pinia';
 import { computed, ref } from 'vue';
 import { api } from '@/api/client';
-import type { CommentCreateInput, DecisionCreateInput, ReviewRequestState, ReviewRequestView, StudyReview } from '@shared/schemas/review.ts';
+import type {
+  CommentCreateInput,
+  DecisionCreateInput,
+  DesignSearchResult,
+  ReviewRequestState,
+  ReviewRequestView,
+  ReviewVerdict,
+  StudyReview,
+} from '@shared/schemas/review.ts';
+import type { SheetCheck } from '@shared/targets/check.ts';
+import { useReviewQueueStore } from './review-queue';
 import { errorText } from './studies';
 
 export type { StudyReview, StudyReviewState } from '@shared/schemas/review.ts';
@@ -41,7 +51,7 @@ export interface DecisionRow {
   id: string;
   label: string;
   design: Record<string, unknown>;
-  metrics: { at: Record<string, unknown> | null; axis: 'az' | 'el'; points: FrozenPoint[]; figures: Record<string, number | boolean | null> };
+  metrics: { at: Record<string, unknown> | null; axis: 'az' | 'el'; points: FrozenPoint[]; figures: Record<string, number | boolean | null>; basis?: string };
   engineVersion: string;
   source: string | null;
   rationale: string;
@@ -52,7 +62,17 @@ export interface DecisionRow {
   status: 'draft' | 'signed' | 'superseded';
   decidedBy: { id: string; name: string };
   createdAt: string;
+  targetSheetId: string | null;
+  targetSheet: (Record<string, unknown> & { name?: string }) | null;
+  check: SheetCheck | null;
+  failedLimits: string[];
+  justification: string;
 }
+
+/** What signing a design would record (POST …/decisions/check), for the confirmation dialog. */
+export type DecisionPreviewRow = Pick<DecisionRow, 'label' | 'design' | 'metrics' | 'targetSheetId' | 'targetSheet' | 'check' | 'failedLimits'> & {
+  metrics: DecisionRow['metrics'] & { basis?: string };
+};
 
 export const useReviewStore = defineStore('review', () => {
   const studyId = ref<string | null>(null);
@@ -113,9 +133,19 @@ export const useReviewStore = defineStore('review', () => {
     await refreshReview();
   }
 
-  async function answer(requestId: string, state: Exclude<RequestState, 'asked'>, note: string): Promise<void> {
+  async function answer(requestId: string, state: ReviewVerdict, note: string): Promise<void> {
     await api.post(`/api/review-requests/${requestId}/answer`, { state, note });
     await refreshReview();
+    // The header's count of open requests follows.
+    void useReviewQueueStore().refresh();
+  }
+
+  async function searchDesigns(q: string, limit = 20): Promise<DesignSearchResult> {
+    return api.get<DesignSearchResult>(`${base()}/design-search?${new URLSearchParams({ q, limit: String(limit) })}`);
+  }
+
+  async function checkDesign(design: DecisionCreateInput['design'], label?: string): Promise<DecisionPreviewRow> {
+    return api.post<DecisionPreviewRow>(`${base()}/decisions/check`, { design, ...(label ? { label } : {}) });
   }
 
   async function decide(input: DecisionCreateInput): Promise<DecisionRow> {
@@ -136,6 +166,6 @@ export const useReviewStore = defineStore('review', () => {
 
   return {
     studyId, comments, review, decisions, members, loading, error, current, reviewers,
-    load, addComment, askReviewers, answer, decide, signDraft, deleteDraft,
+    load, addComment, askReviewers, answer, decide, signDraft, deleteDraft, searchDesigns, checkDesign,
   };
 });

@@ -8,6 +8,7 @@ import { evaluateDesign, patternCut, taperWeights, type Metrics } from '@shared/
 import { DesignSchema, type Design, type DesignInput } from '@shared/schemas/design.ts';
 import { issueFields } from '@shared/schemas/format-issue.ts';
 import { figuresFromPoints, type DesignFigures, type FigurePoint, type ScanRange } from '@shared/targets/index.ts';
+import { scanAngles } from '@shared/targets/scan-angles.ts';
 
 export interface PreviewRequest {
   design: DesignInput;
@@ -36,21 +37,8 @@ export type PreviewResult =
     }
   | { ok: false; fields: { field: string; message: string }[] };
 
-/** Scan grid spacing over the sheet's range, degrees: coarse enough to stay interactive at 64×64. */
-const SCAN_STEP_DEG = 10;
-
-function stepsOver(range: ScanRange): number[] {
-  const n = Math.max(1, Math.ceil((range.max - range.min) / SCAN_STEP_DEG));
-  return Array.from({ length: n + 1 }, (_, i) => range.min + ((range.max - range.min) * i) / n);
-}
-
-/** Steering angles to evaluate: the sheet's scan grid, limited to what the grouping can steer. */
-export function scanAngles(design: Design, az: ScanRange | null | undefined, el: ScanRange | null | undefined): [number, number][] {
-  if (design.codes !== null || (!az && !el)) return [[design.steerAzDeg, design.steerElDeg]];
-  const azs = design.grouping === 'row' ? [0] : az ? stepsOver(az) : [design.steerAzDeg];
-  const els = design.grouping === 'column' ? [0] : el ? stepsOver(el) : [design.steerElDeg];
-  return azs.flatMap((a) => els.map((e): [number, number] => [a, e]));
-}
+// The scan grid is shared with the packet and the decisions, so their worst cases agree with the preview's.
+export { scanAngles } from '@shared/targets/scan-angles.ts';
 
 const toCut = (c: { anglesDeg: Float64Array; powerDb: Float64Array }): Cut => ({
   anglesDeg: Array.from(c.anglesDeg),

@@ -88,7 +88,7 @@ describe('POST /api/studies/:id/decisions', () => {
     const res = await decide(api.reviewer, { design: `${sweep.id}:0` });
     expect(res.status).toBe(201);
     expect(res.body.source).toBe(`${sweep.id}:0`);
-    expect(res.body.label).toMatch(/^Pitch sweep · design #0:/);
+    expect(res.body.label).toMatch(/^Design #0 of “Pitch sweep”: 8×1, 5.35 mm pitch/);
     expect(res.body.metrics.points.map((p: { steerAzDeg: number }) => p.steerAzDeg)).toEqual(angles);
     expect(res.body.metrics.points[2].metrics.scanLossDb).toBeCloseTo(evaluateDesign({ ...params, steerAzDeg: 40 }).scanLossDb, 12);
     // Deleting the sweep later leaves the signed record intact.

@@ -56,23 +56,23 @@ describe('POST /api/studies/:id/review-requests', () => {
 });
 
 describe('answers and the study state', () => {
-  it('goes draft → in review → changes requested → in review → signed off', async () => {
+  it('goes draft → in review → sent back → in review → signed off', async () => {
     const state = async () => (await api.engineer.get(`/api/studies/${studyId}/review`)).body;
     expect((await state()).state).toBe('draft');
     const [request] = (await ask(api.engineer, [api.team.reviewer.id])).body;
     expect(await state()).toMatchObject({ state: 'in_review', asked: 1, answered: 0 });
 
-    const noNote = await api.reviewer.post(`/api/review-requests/${request.id}/answer`).send({ state: 'changes_requested' });
+    const noNote = await api.reviewer.post(`/api/review-requests/${request.id}/answer`).send({ state: 'sent_back' });
     expect(noNote.status).toBe(400);
     expect(noNote.body.error.fields[0].field).toBe('note');
 
-    const changes = await api.reviewer.post(`/api/review-requests/${request.id}/answer`).send({ state: 'changes_requested', note: 'Add a 10-element option.' });
+    const changes = await api.reviewer.post(`/api/review-requests/${request.id}/answer`).send({ state: 'sent_back', note: 'Add a 10-element option.' });
     expect(changes.status).toBe(200);
-    expect(await state()).toMatchObject({ state: 'changes_requested', asked: 1, answered: 1 });
+    expect(await state()).toMatchObject({ state: 'sent_back', asked: 1, answered: 1 });
     const back = await api.mail.latestTo(api.team.engineer.email);
     expect(back.textBody).toContain('Add a 10-element option.');
 
-    const again = await api.reviewer.post(`/api/review-requests/${request.id}/answer`).send({ state: 'approved' });
+    const again = await api.reviewer.post(`/api/review-requests/${request.id}/answer`).send({ state: 'accepted' });
     expect(again.status).toBe(200);
     expect((await state()).state).toBe('in_review');
 
@@ -91,25 +91,25 @@ describe('answers and the study state', () => {
   it('only the asked reviewer may answer (403); other teams get 404', async () => {
     const [request] = (await ask(api.engineer, [api.team.reviewer.id])).body;
     const otherReviewer = await authed(api.app, await seedUser(api.ctx.db, api.team.team.id, 'reviewer'));
-    expect((await otherReviewer.post(`/api/review-requests/${request.id}/answer`).send({ state: 'approved' })).status).toBe(403);
-    expect((await api.engineer.post(`/api/review-requests/${request.id}/answer`).send({ state: 'approved' })).status).toBe(403);
+    expect((await otherReviewer.post(`/api/review-requests/${request.id}/answer`).send({ state: 'accepted' })).status).toBe(403);
+    expect((await api.engineer.post(`/api/review-requests/${request.id}/answer`).send({ state: 'accepted' })).status).toBe(403);
     const outsider = await authed(api.app, (await seedTeam(api.ctx.db, 'Other Co')).reviewer);
-    expect((await outsider.post(`/api/review-requests/${request.id}/answer`).send({ state: 'approved' })).status).toBe(404);
+    expect((await outsider.post(`/api/review-requests/${request.id}/answer`).send({ state: 'accepted' })).status).toBe(404);
   });
 });
 
 describe('studyReviewState(requests, lastSignedAt)', () => {
   const at = (s: number) => new Date(Date.UTC(2025, 0, 1, 0, 0, s));
-  const req = (reviewerId: string, state: 'asked' | 'approved' | 'changes_requested', s: number) => ({ reviewerId, state, createdAt: at(s), answeredAt: null });
+  const req = (reviewerId: string, state: 'asked' | 'accepted' | 'sent_back', s: number) => ({ reviewerId, state, createdAt: at(s), answeredAt: null });
 
   it('is draft with no requests and signed off with a signature and no later request', () => {
     expect(studyReviewState([], null)).toBe('draft');
-    expect(studyReviewState([req('a', 'approved', 1)], at(5))).toBe('signed_off');
+    expect(studyReviewState([req('a', 'accepted', 1)], at(5))).toBe('signed_off');
   });
 
   it('uses each reviewer’s latest request of the round', () => {
-    expect(studyReviewState([req('a', 'changes_requested', 1), req('a', 'asked', 2)], null)).toBe('in_review');
-    expect(studyReviewState([req('a', 'approved', 1), req('b', 'changes_requested', 2)], null)).toBe('changes_requested');
-    expect(studyReviewState([req('a', 'changes_requested', 1), req('b', 'asked', 9)], at(5))).toBe('in_review');
+    expect(studyReviewState([req('a', 'sent_back', 1), req('a', 'asked', 2)], null)).toBe('in_review');
+    expect(studyReviewState([req('a', 'accepted', 1), req('b', 'sent_back', 2)], null)).toBe('sent_back');
+    expect(studyReviewState([req('a', 'sent_back', 1), req('b', 'asked', 9)], at(5))).toBe('in_review');
   });
 });

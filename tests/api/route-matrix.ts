@@ -285,7 +285,10 @@ export const matrix: MatrixRow[] = [
   // review and sign-off: the fixture study holds one signed decision, one open request to team A's reviewer, one comment
   { method: 'GET', path: '/api/studies/:id/review', params: { id: 'studyId' }, ...member(200), otherTeam: 404 },
   { method: 'POST', path: '/api/studies/:id/review-requests', params: { id: 'studyId' }, body: { reviewerIds: [] }, anonymous: 401, reviewer: 403, engineer: 400, admin: 400, otherTeam: 400 },
-  { method: 'POST', path: '/api/review-requests/:id/answer', params: { id: 'reviewRequestId' }, body: { state: 'approved' }, anonymous: 401, reviewer: 200, engineer: 403, admin: 403, otherTeam: 403 },
+  { method: 'GET', path: '/api/review-requests/waiting', ...member(200) },
+  { method: 'POST', path: '/api/studies/:id/decisions/check', params: { id: 'studyId' }, body: { design: { frequencyGHz: 28, nx: 4, dxMm: 5 } }, anonymous: 401, reviewer: 200, engineer: 403, admin: 403, otherTeam: 403 },
+  { method: 'GET', path: '/api/studies/:id/design-search', params: { id: 'studyId' }, ...member(200), otherTeam: 404 },
+  { method: 'POST', path: '/api/review-requests/:id/answer', params: { id: 'reviewRequestId' }, body: { state: 'accepted' }, anonymous: 401, reviewer: 200, engineer: 403, admin: 403, otherTeam: 403 },
   { method: 'GET', path: '/api/studies/:id/comments', params: { id: 'studyId' }, ...member(200), otherTeam: 404 },
   { method: 'POST', path: '/api/studies/:id/comments', params: { id: 'studyId' }, body: { body: 'matrix' }, ...member(201), otherTeam: 404 },
   { method: 'GET', path: '/api/comments/:id', params: { id: 'commentId' }, ...member(200), otherTeam: 404 },
@@ -313,6 +316,7 @@ export const matrix: MatrixRow[] = [
   { method: 'GET', path: '/api/range-data/:id', params: { id: 'rangeUploadId' }, ...member(200), otherTeam: 404 },
   { method: 'GET', path: '/api/range-data/:id/raw', params: { id: 'rangeUploadId' }, ...member(200), otherTeam: 404 },
   { method: 'DELETE', path: '/api/range-data/:id', params: { id: 'rangeUploadId' }, anonymous: 401, reviewer: 403, engineer: 204, admin: 204, otherTeam: 404 },
+
   // element patterns (one stored 2 × 2 grid); a JSON body carries no file, so uploaders get the 400 naming it
   { method: 'POST', path: '/api/studies/:id/element-patterns', params: { id: 'studyId' }, body: {}, anonymous: 401, reviewer: 403, engineer: 400, admin: 400, otherTeam: 404 },
   { method: 'GET', path: '/api/studies/:id/element-patterns', params: { id: 'studyId' }, ...member(200), otherTeam: 404 },

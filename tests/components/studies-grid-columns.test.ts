@@ -14,7 +14,16 @@ describe('studiesColumns()', () => {
   const cols = studiesColumns(() => new Date('2025-03-01T00:00:00Z'));
 
   it('has the columns of the studies list, in order', () => {
-    expect(cols.map((c) => c.headerName)).toEqual(['Name', 'Owner', 'Target sheet', 'Candidates', 'Sweeps', 'Last change', 'Shared with']);
+    expect(cols.map((c) => c.headerName)).toEqual(['Name', 'Owner', 'Target sheet', 'Candidates', 'Sweeps', 'Review', 'Last change', 'Shared with']);
+  });
+
+  it('shows the review state and counts review activity as the last change', () => {
+    const byId = Object.fromEntries(cols.map((c) => [c.colId, c]));
+    const get = (id: string, data: StudyRow) => (byId[id]!.valueGetter as (p: ValueGetterParams<StudyRow>) => unknown)({ data } as ValueGetterParams<StudyRow>);
+    expect(get('review', { ...row, reviewState: 'sent_back' })).toBe('Sent back');
+    expect(get('review', row)).toBe('Draft');
+    expect(get('lastChange', { ...row, lastChangeAt: '2025-02-20T09:00:00Z' })).toBe('2025-02-20T09:00:00Z');
+    expect(get('lastChange', row)).toBe(row.updatedAt);
   });
 
   it('reads each column from the list row', () => {

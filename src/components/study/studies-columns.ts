@@ -1,6 +1,7 @@
 /** Column definitions of the studies list. Pure, so the component test checks headers and formatting directly. */
 import type { ColDef, ValueFormatterParams, ValueGetterParams } from 'ag-grid-community';
 import type { StudyRow } from '@/stores/studies';
+import { STUDY_STATE_LABELS } from '@/components/review/review-labels';
 
 /** "Whole team", the people it is shared with, or "Only the owner". */
 export function sharedWithText(row: Pick<StudyRow, 'visibility' | 'sharedWith'>): string {
@@ -44,9 +45,17 @@ export function studiesColumns(now: () => Date = () => new Date()): ColDef<Study
     { colId: 'candidates', headerName: 'Candidates', field: 'candidateCount', type: 'rightAligned', width: 120 },
     { colId: 'sweeps', headerName: 'Sweeps', field: 'sweepCount', type: 'rightAligned', width: 100 },
     {
+      colId: 'review',
+      headerName: 'Review',
+      valueGetter: (p: ValueGetterParams<StudyRow>) => STUDY_STATE_LABELS[p.data?.reviewState ?? 'draft'].text,
+      cellClass: (p) => `review-${p.data?.reviewState ?? 'draft'}`,
+      width: 130,
+    },
+    {
       colId: 'lastChange',
       headerName: 'Last change',
-      field: 'updatedAt',
+      // Review activity (asked, answered, commented, signed) counts as a change of the study.
+      valueGetter: (p: ValueGetterParams<StudyRow>) => p.data?.lastChangeAt ?? p.data?.updatedAt,
       width: 150,
       sort: 'desc',
       valueFormatter: (p: ValueFormatterParams<StudyRow>) => lastChangeText(p.value as string, now()),
