@@ -94,12 +94,13 @@ const BODIES: Record<string, BodySpec> = {
   },
   'POST /api/studies/:id/comments': { body: () => ({ body: 'Looks fine', target: { kind: 'study' }, mentions: [] }) },
   'POST /api/studies/:id/review-requests': { body: (ids) => ({ reviewerIds: [ids.reviewerId], message: 'please look' }), allowEmpty: ['message'] },
-  'POST /api/review-requests/:id/answer': { body: () => ({ state: 'approved', note: 'ok' }), allowEmpty: ['note'] },
+  'POST /api/review-requests/:id/answer': { body: () => ({ state: 'accepted', note: 'ok' }), allowEmpty: ['note'] },
   'POST /api/studies/:id/decisions': {
     body: () => ({ design: { ...DESIGN }, label: 'Choice', rationale: 'Because', alternatives: [{ label: 'Other', reason: 'r' }], sign: false }),
     allowEmpty: ['alternatives[0].reason'],
   },
   'PATCH /api/decisions/:id': { body: () => ({ label: 'Choice 2', rationale: 'Because 2' }) },
+  'POST /api/studies/:id/decisions/check': { body: () => ({ design: { ...DESIGN }, label: 'Choice' }) },
   'POST /api/candidates/:id/codes': { body: () => ({ beams: '-30:30:15', pointingThresholdDeg: 2, calibration: 'none' }) },
   'POST /api/candidates/:id/manual-codes': { body: () => ({ codes: [0, 1, 2, 3, 4, 5, 6, 7], calibration: 'none' }) },
   'POST /api/candidates/:id/squint': { body: () => ({ beam: { azDeg: 20, elDeg: 0 }, band: 'n257', points: 11, calibration: 'none' }) },
@@ -130,6 +131,7 @@ const QUERIES: Record<string, string[]> = {
     'beams=-30:30:15&threshold=-1', 'beams=-30:30:15&calibration=zz'],
   'GET /api/studies/:id/packet': ['distanceM=-1', 'distanceM=NaN', 'distanceM=1e999', 'distanceM=abc', 'referenceWm2=0', 'referenceWm2=1e308'],
   'GET /api/studies/:id/packet.pdf': ['distanceM=-1', 'distanceM=Infinity', 'referenceWm2=abc'],
+  'GET /api/studies/:id/design-search': ['limit=0', 'limit=51', 'limit=abc', `q=${'x'.repeat(201)}`, 'zz=1'],
 };
 
 /**
