@@ -9,6 +9,7 @@ import { eirpDip } from './eirp-dip.ts';
 import { eirpPeak } from './eirp-peak.ts';
 import type { Extremum } from './refine-extremum.ts';
 import { regionGrid } from './region-grid.ts';
+import { resolveCodebooks } from './resolve-codebooks.ts';
 import { sampleRegion, type RegionSamples } from './sample-region.ts';
 import { cdfQuantileDbm, weightedCdf } from './weighted-cdf.ts';
 
@@ -36,11 +37,12 @@ function servedFractions(samples: RegionSamples, modules: number, total: number)
  * cell solid angle; peak and dip refined by a local search. Pure; fast enough for a browser worker.
  */
 export function computeCoverage(input: CoverageInput): CoverageResult {
-  const eirp = deviceEirp(input.modules);
-  const grid = regionGrid(input.region, input.stepDeg ?? autoStepDeg(input.modules.map((m) => m.design)));
+  const { modules, fills } = resolveCodebooks(input.modules);
+  const eirp = deviceEirp(modules);
+  const grid = regionGrid(input.region, input.stepDeg ?? autoStepDeg(modules.map((m) => m.design)));
   const samples = sampleRegion(eirp, grid);
   const cdf = weightedCdf(samples.eirpMw, samples.weightSr);
-  const peak = eirpPeak(eirp, input.modules.map((m) => m.beams), grid, samples);
+  const peak = eirpPeak(eirp, modules.map((m) => m.beams), grid, samples);
   const dip = eirpDip(eirp, grid, samples);
   const peakEirpDbm = dbm(peak.value);
   const minEirpDbm = cdf.darkFraction > 0 ? null : dbm(dip.value);
@@ -54,7 +56,7 @@ export function computeCoverage(input: CoverageInput): CoverageResult {
     if (level !== null) curve.push({ fraction: i / CDF_STEPS, eirpDbm: level });
   }
   const lit = (k: number) => samples.module[k]! >= 0;
-  const shares = servedFractions(samples, input.modules.length, grid.solidAngleSr);
+  const shares = servedFractions(samples, modules.length, grid.solidAngleSr);
   return {
     region: input.region,
     solidAngleSr: grid.solidAngleSr,
@@ -73,9 +75,11 @@ export function computeCoverage(input: CoverageInput): CoverageResult {
       module: Array.from(samples.module, (m, k) => (lit(k) ? m : null)),
       beam: Array.from(samples.beam, (b, k) => (lit(k) ? b : null)),
     },
-    modules: input.modules.map((m, i) => ({
+    modules: modules.map((m, i) => ({
       conductedPowerDbm: eirp.modules[i]!.conductedPowerDbm,
       beams: m.beams.length,
+      codebook: m.beams,
+      fill: fills[i]!,
       servedFraction: shares[i]!,
     })),
     exposure: peakEirpDbm === null ? null : exposureEstimate({ eirpDbm: peakEirpDbm }),

@@ -1,5 +1,6 @@
 import type { ExposureEstimate } from '../safety/index.ts';
-import type { Region } from '../schemas/coverage.ts';
+import type { Beam, Region } from '../schemas/coverage.ts';
+import type { FillOutcome } from './resolve-codebooks.ts';
 
 /** A direction (device frame, degrees) with the module and beam serving it; null where nothing radiates. */
 export interface ServedDirection {
@@ -39,8 +40,11 @@ export interface CoverageResult {
   /** The solid-angle CDF at 0.5 % steps for charts: fraction of the region at or below each level. */
   cdf: { fraction: number; eirpDbm: number }[];
   map: CoverageMap;
-  /** Per module: conducted power and the share of the region's solid angle its beams serve best. */
-  modules: { conductedPowerDbm: number; beams: number; servedFraction: number }[];
+  /**
+   * Per module: conducted power, its codebook (beam count and list, module frame; a fill rule's choice with the
+   * crossover it reached, else fill null) and the share of the region's solid angle its beams serve best.
+   */
+  modules: { conductedPowerDbm: number; beams: number; codebook: Beam[]; fill: FillOutcome | null; servedFraction: number }[];
   /** Far-field exposure estimate at the peak EIRP (1 m, ICNIRP 2020 reference); null when nothing radiates. */
   exposure: ExposureEstimate | null;
   /** Shown with every result: the model's limits (hand, head, housing) and the RF-exposure caution. */

@@ -1,4 +1,4 @@
-import type { CoverageModule } from '../schemas/coverage.ts';
+import type { ResolvedModule } from '../schemas/coverage.ts';
 import { elementPower, gainModel } from '../engine/index.ts';
 import type { ElementPower } from '../engine/element/element-power.ts';
 import { deviceDirection } from './device-direction.ts';
@@ -30,7 +30,7 @@ export interface DeviceEirp {
  * EIRP(d) = max over modules and beams of conductedPowerDbm + G_beam(d in the module frame), in linear
  * terms (mW). One gain model per beam: the module's design steered to the beam, phases quantised by the engine.
  */
-export function deviceEirp(modules: readonly CoverageModule[]): DeviceEirp {
+export function deviceEirp(modules: readonly ResolvedModule[]): DeviceEirp {
   const placed: PlacedModule[] = modules.map((m) => {
     const beams = m.beams.map((b) => gainModel({ ...m.design, steerAzDeg: b.azDeg, steerElDeg: b.elDeg, codes: null }));
     const power = beams[0]?.conductedPowerDbm;

@@ -1,6 +1,6 @@
 import { HALF_PI, RAD_PER_DEG } from '../engine/constants.ts';
 import { wavelengthMm } from '../engine/units/wavelength-mm.ts';
-import type { Beam, CoverageModule, Region } from '../schemas/coverage.ts';
+import type { Beam, Region, ResolvedModule } from '../schemas/coverage.ts';
 import type { Design } from '../schemas/design.ts';
 import { autoStepDeg } from './auto-step-deg.ts';
 import { deviceEirp } from './device-eirp.ts';
@@ -34,7 +34,7 @@ interface Tried {
 
 /** Keeps the beams that serve some direction of the grid; crossover = codebook peak over the region's dip. */
 function judge(design: Design, grid: RegionGrid, beams: Beam[], spacing: number): Tried {
-  const probe = (list: Beam[]): CoverageModule => ({ design, orientation: 'front', beams: list });
+  const probe = (list: Beam[]): ResolvedModule => ({ design, orientation: 'front', beams: list });
   const used = new Set(sampleRegion(deviceEirp([probe(beams)]), grid).beam);
   const kept = beams.filter((_, i) => used.has(i));
   if (kept.length === 0) return { beams, crossoverDb: null, spacing };

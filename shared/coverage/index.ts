@@ -10,3 +10,4 @@ export { gridCodebook, parseGridSpec } from './grid-codebook.ts';
 export { fillRegionCodebook, type FilledCodebook } from './fill-region-codebook.ts';
 export { autoStepDeg } from './auto-step-deg.ts';
 export { COVERAGE_CAUTIONS, COVERAGE_MODEL_CAUTION } from './coverage-cautions.ts';
+export { resolveCodebooks, type FillOutcome } from './resolve-codebooks.ts';

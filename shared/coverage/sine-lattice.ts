@@ -1,6 +1,6 @@
 import { DEG_PER_RAD, RAD_PER_DEG } from '../engine/constants.ts';
 import type { Beam, Region } from '../schemas/coverage.ts';
-import { MAX_BEAMS_PER_MODULE } from '../schemas/coverage.ts';
+import { MAX_FILL_BEAMS } from '../schemas/coverage.ts';
 import type { Design } from '../schemas/design.ts';
 import { regionGrid } from './region-grid.ts';
 
@@ -38,7 +38,7 @@ export function sineLattice(design: Design, region: Region, stepDeg: number, spa
   const steersV = design.ny > 1 && design.grouping !== 'column';
   const us = steersU ? centred(uMin, uMax, spanMm / (design.nx * design.dxMm)) : [0];
   const vs = steersV ? centred(vMin, vMax, spanMm / (design.ny * design.dyMm)) : [0];
-  if (us.length * vs.length > 4 * MAX_BEAMS_PER_MODULE) return null;
+  if (us.length * vs.length > 4 * MAX_FILL_BEAMS) return null;
   const beams: Beam[] = [];
   for (const v of vs) {
     for (const u of us) {
@@ -47,5 +47,5 @@ export function sineLattice(design: Design, region: Region, stepDeg: number, spa
       beams.push({ azDeg: round2(Math.atan2(u, Math.sqrt(w2)) * DEG_PER_RAD), elDeg: round2(Math.asin(v) * DEG_PER_RAD) });
     }
   }
-  return beams.length > MAX_BEAMS_PER_MODULE ? null : beams;
+  return beams.length > MAX_FILL_BEAMS ? null : beams;
 }

@@ -15,6 +15,8 @@ export type Orientation = (typeof ORIENTATIONS)[number];
 export const MAX_MODULES = 8;
 export const MAX_BEAMS_PER_MODULE = 128;
 export const MAX_BEAMS = 256;
+/** Most beams a fill rule may choose for one module. */
+export const MAX_FILL_BEAMS = 64;
 export const MAX_PERCENTILES = 32;
 /** Sampling steps (degrees) a request may choose; without one, autoStepDeg picks it from the beamwidths. */
 export const MIN_STEP_DEG = 0.25;
@@ -30,52 +32,6 @@ const steer = (what: string) =>
 
 export const BeamSchema = z.object({ azDeg: steer('azimuth'), elDeg: steer('elevation') }, { error: 'must be a beam {azDeg, elDeg}' }).strict();
 export type Beam = z.output<typeof BeamSchema>;
-
-const BEAMS_RULE = 'must be an array of beams {azDeg, elDeg} or a grid {grid: "az START:STOP:STEP × el START:STOP:STEP"}';
-
-const BeamListSchema = z
-  .array(BeamSchema, { error: BEAMS_RULE })
-  .min(1, 'must hold at least one beam')
-  .max(MAX_BEAMS_PER_MODULE, `must hold at most ${MAX_BEAMS_PER_MODULE} beams`);
-
-/** A codebook written as a grid spec; expands to its beam list, so the engine only ever sees lists. */
-export const GridCodebookSchema = z
-  .object({ grid: z.string({ error: 'must be a grid spec "az START:STOP:STEP × el START:STOP:STEP"' }).max(200, 'must be at most 200 characters') }, { error: BEAMS_RULE })
-  .strict()
-  .transform((g, ctx) => {
-    const r = parseGridSpec(g.grid);
-    if ('beams' in r) return r.beams;
-    ctx.addIssue({ code: 'custom', path: ['grid'], message: r.problem });
-    return z.NEVER;
-  });
-
-export const CoverageModuleSchema = z
-  .object(
-    {
-      design: DesignSchema,
-      orientation: z.enum(ORIENTATIONS, { error: `must be one of ${ORIENTATIONS.map((o) => `"${o}"`).join(', ')}` }),
-      beams: z.union([BeamListSchema, GridCodebookSchema], { error: BEAMS_RULE }),
-    },
-    { error: 'must be a module {design, orientation, beams}' },
-  )
-  .strict()
-  .superRefine((m, ctx) => {
-    if (m.design.channelPowerDbm === null) {
-      ctx.addIssue({ code: 'custom', path: ['design', 'channelPowerDbm'], message: 'must be set for coverage (EIRP needs the power per channel)' });
-    }
-    if (m.design.codes !== null) {
-      ctx.addIssue({ code: 'custom', path: ['design', 'codes'], message: 'must be null in a module (its beams set the phases)' });
-    }
-    m.beams.forEach((b, i) => {
-      if (m.design.grouping === 'column' && b.elDeg !== 0) {
-        ctx.addIssue({ code: 'custom', path: ['beams', i, 'elDeg'], message: 'must be 0 with column grouping (columns steer in azimuth only)' });
-      }
-      if (m.design.grouping === 'row' && b.azDeg !== 0) {
-        ctx.addIssue({ code: 'custom', path: ['beams', i, 'azDeg'], message: 'must be 0 with row grouping (rows steer in elevation only)' });
-      }
-    });
-  });
-export type CoverageModule = z.output<typeof CoverageModuleSchema>;
 
 const azLimit = z
   .number({ error: 'must be a number from -180 to 180 (degrees, device frame)' })
@@ -101,6 +57,79 @@ export const RegionSchema = z.discriminatedUnion(
   { error: 'must be a region: {kind: "sphere"} or {kind: "sector", azMinDeg, azMaxDeg, elMinDeg, elMaxDeg}' },
 );
 export type Region = z.output<typeof RegionSchema>;
+
+const BEAMS_RULE =
+  'must be an array of beams {azDeg, elDeg}, a grid {grid: "az START:STOP:STEP × el START:STOP:STEP"} or a fill rule {fill: {region, crossoverDb}}';
+
+const BeamListSchema = z
+  .array(BeamSchema, { error: BEAMS_RULE })
+  .min(1, 'must hold at least one beam')
+  .max(MAX_BEAMS_PER_MODULE, `must hold at most ${MAX_BEAMS_PER_MODULE} beams`);
+
+/** A codebook written as a grid spec; expands to its beam list, so the engine only ever sees lists. */
+export const GridCodebookSchema = z
+  .object({ grid: z.string({ error: 'must be a grid spec "az START:STOP:STEP × el START:STOP:STEP"' }).max(200, 'must be at most 200 characters') }, { error: BEAMS_RULE })
+  .strict()
+  .transform((g, ctx) => {
+    const r = parseGridSpec(g.grid);
+    if ('beams' in r) return r.beams;
+    ctx.addIssue({ code: 'custom', path: ['grid'], message: r.problem });
+    return z.NEVER;
+  });
+
+const crossoverRule = 'must be a number from 0.1 to 30 (dB below the codebook\'s peak)';
+
+/**
+ * "Fill the region": the fewest beams on a sine-space grid whose best beam stays within crossoverDb of the
+ * codebook's peak over `region` (the module's own frame; a sphere means its front hemisphere). Expanded by
+ * computeCoverage, on the worker that runs it, since the search takes longer than a request parse should.
+ */
+export const FillCodebookSchema = z
+  .object(
+    {
+      fill: z
+        .object(
+          { region: RegionSchema, crossoverDb: z.number({ error: crossoverRule }).min(0.1, crossoverRule).max(30, crossoverRule) },
+          { error: 'must be {region, crossoverDb}' },
+        )
+        .strict(),
+    },
+    { error: BEAMS_RULE },
+  )
+  .strict();
+export type FillCodebook = z.output<typeof FillCodebookSchema>;
+
+export const CoverageModuleSchema = z
+  .object(
+    {
+      design: DesignSchema,
+      orientation: z.enum(ORIENTATIONS, { error: `must be one of ${ORIENTATIONS.map((o) => `"${o}"`).join(', ')}` }),
+      beams: z.union([BeamListSchema, GridCodebookSchema, FillCodebookSchema], { error: BEAMS_RULE }),
+    },
+    { error: 'must be a module {design, orientation, beams}' },
+  )
+  .strict()
+  .superRefine((m, ctx) => {
+    if (m.design.channelPowerDbm === null) {
+      ctx.addIssue({ code: 'custom', path: ['design', 'channelPowerDbm'], message: 'must be set for coverage (EIRP needs the power per channel)' });
+    }
+    if (m.design.codes !== null) {
+      ctx.addIssue({ code: 'custom', path: ['design', 'codes'], message: 'must be null in a module (its beams set the phases)' });
+    }
+    if (!Array.isArray(m.beams)) return;
+    m.beams.forEach((b, i) => {
+      if (m.design.grouping === 'column' && b.elDeg !== 0) {
+        ctx.addIssue({ code: 'custom', path: ['beams', i, 'elDeg'], message: 'must be 0 with column grouping (columns steer in azimuth only)' });
+      }
+      if (m.design.grouping === 'row' && b.azDeg !== 0) {
+        ctx.addIssue({ code: 'custom', path: ['beams', i, 'azDeg'], message: 'must be 0 with row grouping (rows steer in elevation only)' });
+      }
+    });
+  });
+export type CoverageModule = z.output<typeof CoverageModuleSchema>;
+/** A module whose codebook is a beam list (a fill rule expanded). */
+export type ResolvedModule = Omit<CoverageModule, 'beams'> & { beams: Beam[] };
+
 
 const percentile = z
   .number({ error: 'must be a number from 0 to 100 (percent of the region\'s solid angle)' })
@@ -136,7 +165,8 @@ export const CoverageRequestSchema = z
   )
   .strict()
   .superRefine((r, ctx) => {
-    const beams = r.modules.reduce((s, m) => s + m.beams.length, 0);
+    // A fill rule counts as the most beams it may choose.
+    const beams = r.modules.reduce((s, m) => s + (Array.isArray(m.beams) ? m.beams.length : MAX_FILL_BEAMS), 0);
     if (beams > MAX_BEAMS) ctx.addIssue({ code: 'custom', path: ['modules'], message: `must hold at most ${MAX_BEAMS} beams in all (got ${beams})` });
     const cells = gridCells(r.region, r.stepDeg ?? autoStepDeg(r.modules.map((m) => m.design)));
     if (cells.az * cells.el * beams > MAX_WORK) {

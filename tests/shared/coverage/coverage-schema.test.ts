@@ -28,6 +28,8 @@ describe('CoverageRequestSchema', () => {
     expect(first({ ...good, percentiles: [50, 101] })).toMatch(/^percentiles\[1\]: must be a number from 0 to 100/);
     expect(first({ ...good, stepDeg: 0.1 })).toMatch(/^stepDeg: must be a number from 0.25 to 5/);
     expect(first({ ...good, extra: 1 })).toBe('extra: is not a known field');
+    expect(first({ ...good, modules: [{ ...good.modules[0], beams: { fill: { region: { kind: 'sphere' }, crossoverDb: 0 } } }] })).toMatch(/^modules\[0\]\.beams\.fill\.crossoverDb: must be a number from 0\.1 to 30/);
+    expect(first({ ...good, modules: [{ ...good.modules[0], beams: { fill: { crossoverDb: 3 } } }] })).toMatch(/^modules\[0\]\.beams\.fill\.region: must be a region/);
   });
 
   it('refuses more work than one computation should take', () => {

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { fillRegionCodebook } from '../../../shared/coverage/index.ts';
+import { computeCoverage, fillRegionCodebook } from '../../../shared/coverage/index.ts';
+import { CoverageRequestSchema } from '../../../shared/schemas/coverage.ts';
 import { DesignSchema } from '../../../shared/schemas/design.ts';
 
 const LAMBDA_28_MM = 299.792458 / 28;
@@ -32,5 +33,18 @@ describe('fillRegionCodebook(design, region, crossoverDb)', () => {
     expect(r.met).toBe(false);
     expect(r.crossoverDb!).toBeGreaterThan(-15 * Math.log10(Math.cos(Math.PI / 3)));
     expect(r.targetCrossoverDb).toBe(3);
+  });
+
+  it('is what a module\'s {fill} codebook rule expands to inside computeCoverage, with the crossover reported', () => {
+    // Same closed form as above (Balanis §6.3): spacing 0.8·λ/(N·d), 5 beams, 2.38 dB at the crossovers.
+    const design = { frequencyGHz: 28, nx: N, dxMm: LAMBDA_28_MM / 2, element: { kind: 'isotropic' as const }, channelPowerDbm: 0 };
+    const region = { kind: 'sector' as const, azMinDeg: -30, azMaxDeg: 30, elMinDeg: -2, elMaxDeg: 2 };
+    const r = computeCoverage(CoverageRequestSchema.parse({ modules: [{ design, orientation: 'front', beams: { fill: { region, crossoverDb: 3 } } }], region, stepDeg: 1 }));
+    expect(r.modules[0]!.beams).toBe(5);
+    expect(r.modules[0]!.codebook.map((b) => b.azDeg)).toEqual([-23.58, -11.54, 0, 11.54, 23.58]);
+    expect(r.modules[0]!.fill).toEqual(expect.objectContaining({ met: true, targetCrossoverDb: 3, spacing: 0.8 }));
+    expect(Math.abs(r.modules[0]!.fill!.crossoverDb! - midwayLossDb(0.8))).toBeLessThan(0.01);
+    // The device's own dip over the same region (front face = module frame) is the same crossover below its peak.
+    expect(Math.abs(r.peakEirpDbm! - r.minEirpDbm! - midwayLossDb(0.8))).toBeLessThan(0.01);
   });
 });
