@@ -27,6 +27,8 @@ export interface Cluster {
   /** URL for the cluster's superuser, for maintenance and tests. */
   readonly adminUrl: string;
   readonly port: number;
+  /** Records the app's URL beside the cluster, for the message a second start in this folder prints. */
+  announce(url: string): void;
   stop(): Promise<void>;
   /** Stops and starts the server again on the same port (fault tests). */
   restart(): Promise<void>;
@@ -89,18 +91,73 @@ function initCluster(binDir: string, pgdata: string, creds: Credentials): void {
   }
 }
 
-/** A postmaster.pid left by a crash: stop the orphan server if it still runs, else drop the file. */
-async function clearStalePid(pgdata: string, log: (m: string) => void): Promise<void> {
+/** Thrown when another live Lobewise process runs the cluster in this folder; nothing of it was touched. */
+export class ClusterInUseError extends Error {
+  override name = 'ClusterInUseError';
+}
+
+/** Who started the cluster in a folder: written at start, given the app's URL once it listens, removed at stop. */
+interface Owner {
+  pid: number;
+  pgPort: number;
+  url?: string;
+}
+
+const ownerFile = (dataDir: string) => path.join(dataDir, 'owner.json');
+
+function readOwner(dataDir: string): Owner | null {
+  try {
+    return JSON.parse(readFileSync(ownerFile(dataDir), 'utf8')) as Owner;
+  } catch {
+    return null;
+  }
+}
+
+function commandOf(pid: number): string {
+  try {
+    return pid > 0 ? readFileSync(`/proc/${pid}/cmdline`, 'utf8') : '';
+  } catch {
+    return ''; // not running
+  }
+}
+
+/** Whether a PostgreSQL server answers on the port (any answer, even "password authentication failed"). */
+async function answers(port: number): Promise<boolean> {
+  const client = new pg.Client({ host: '127.0.0.1', port, user: 'probe', password: 'probe', database: 'postgres', connectionTimeoutMillis: 3000 });
+  try {
+    await client.connect();
+    return true;
+  } catch (err) {
+    // An error message from PostgreSQL (it carries a severity) came from a live server; a socket error means nobody is there.
+    return typeof (err as { severity?: unknown }).severity === 'string';
+  } finally {
+    await client.end().catch(() => undefined);
+  }
+}
+
+/**
+ * A postmaster.pid in the folder. A live cluster (its postmaster alive and answering on its port) that belongs
+ * to a live Lobewise process, or to no process we can name, is left alone: ClusterInUseError. Only a dead
+ * postmaster, or one whose Lobewise process died (a crash), is stale: the orphan is stopped, the file dropped.
+ */
+async function clearStalePid(dataDir: string, pgdata: string, log: (m: string) => void): Promise<void> {
   const pidFile = path.join(pgdata, 'postmaster.pid');
   if (!existsSync(pidFile)) return;
-  const pid = Number(readFileSync(pidFile, 'utf8').split('\n')[0]);
-  let cmdline = '';
-  try {
-    cmdline = readFileSync(`/proc/${pid}/cmdline`, 'utf8');
-  } catch {
-    /* not running */
+  const lines = readFileSync(pidFile, 'utf8').split('\n');
+  const pid = Number(lines[0]);
+  const pgPort = Number(lines[3]);
+  const alive = commandOf(pid).includes('postgres');
+  if (alive && (await answers(pgPort))) {
+    const owner = readOwner(dataDir);
+    const ownerAlive = owner !== null && owner.pid !== process.pid && commandOf(owner.pid).includes('node');
+    if (owner === null || ownerAlive) {
+      const where = owner?.url ? `port ${new URL(owner.url).port} (${owner.url})` : `database port ${pgPort}`;
+      throw new ClusterInUseError(
+        `Lobewise is already running from this folder on ${where}${owner ? ` (process ${owner.pid})` : ''}; stop it first or use another DATA_DIR`,
+      );
+    }
   }
-  if (pid > 0 && cmdline.includes('postgres')) {
+  if (alive) {
     log(`stopping PostgreSQL left running from an earlier run (pid ${pid})`);
     process.kill(pid, 'SIGINT');
     const deadline = Date.now() + 30_000;
@@ -176,12 +233,14 @@ export async function startCluster(options: ClusterOptions): Promise<Cluster> {
   let child: ChildProcess;
 
   const launch = async () => {
-    await clearStalePid(pgdata, log);
+    await clearStalePid(dataDir, pgdata, log);
     const out = openSync(logFile, 'a');
     const [cmd, args] = asServerUser(path.join(binDir, 'postgres'), serverArgs(pgdata, options.port, options.durable));
     child = spawn(cmd, args, { stdio: ['ignore', out, out] });
+    writeOwner({ pid: process.pid, pgPort: options.port });
     await waitUntilReady(adminUrl, child, logFile);
   };
+  const writeOwner = (owner: Owner) => writeFileSync(ownerFile(dataDir), JSON.stringify(owner), { mode: 0o600 });
 
   const stop = async () => {
     if (!child || child.exitCode !== null || child.signalCode !== null) return;
@@ -190,6 +249,7 @@ export async function startCluster(options: ClusterOptions): Promise<Cluster> {
     const timer = setTimeout(() => child.kill('SIGQUIT'), 20_000);
     await exited;
     clearTimeout(timer);
+    if (readOwner(dataDir)?.pid === process.pid) rmSync(ownerFile(dataDir), { force: true });
   };
 
   await launch();
@@ -198,6 +258,7 @@ export async function startCluster(options: ClusterOptions): Promise<Cluster> {
     url: pgUrl(APP_ROLE, creds.appPassword, options.port, options.database),
     adminUrl,
     port: options.port,
+    announce: (url) => writeOwner({ pid: process.pid, pgPort: options.port, url }),
     stop,
     restart: async () => {
       await stop();
