@@ -4,14 +4,15 @@
  * Files under /assets/ carry a content hash in their names, so browsers may keep them for a year without asking
  * again; index.html (and anything else unhashed) is revalidated on every load so a new build shows at once.
  */
+import type { ServerResponse } from 'node:http';
 import path from 'node:path';
-import type { Express, Response } from 'express';
+import type { Express } from 'express';
 import expressStaticGzip from 'express-static-gzip';
 
 export const HASHED_ASSET_CACHE = 'public, max-age=31536000, immutable';
 export const REVALIDATE = 'no-cache';
 
-function cacheHeaders(res: Response, file: string): void {
+function cacheHeaders(res: ServerResponse, file: string): void {
   const hashed = file.split(path.sep).includes('assets');
   res.setHeader('Cache-Control', hashed ? HASHED_ASSET_CACHE : REVALIDATE);
 }
