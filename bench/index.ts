@@ -3,9 +3,14 @@ const benches: Record<string, () => Promise<{ run: (argv: string[]) => Promise<v
   evaluate: () => import('./evaluate.ts'),
   sweep: () => import('./sweep.ts'),
   results: () => import('./results.ts'),
+  cost: () => import('./cost.ts'),
   load: () => import('./load.ts'),
   password: () => import('./password.ts'),
+  health: () => import('./health.ts'),
   coverage: () => import('./coverage.ts'),
+  pages: () => import('./pages.ts'),
+  lighthouse: () => import('./lighthouse.ts'),
+  cli: () => import('./cli.ts'),
 };
 
 const [only, ...rest] = process.argv.slice(2);

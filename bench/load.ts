@@ -1,64 +1,48 @@
 /**
  * `npm run bench -- load [--connections 16] [--seconds 10]`: a throw-away PostgreSQL and a real server with
  * the demo data on loopback, N signed-in clients (one session each, on their own connection) and autocannon
- * driving three scenarios for a bounded time each: trade-table design pages, per-point result pages and
- * candidate evaluations. Prints requests per second and p50/p95/p99 latency per scenario, then stops.
+ * driving four scenarios for a bounded time each: the signed-in `GET /api/me` (the cost of the stack itself),
+ * trade-table design pages, per-point result pages and candidate evaluations. The load comes from a worker
+ * thread (bench/load-driver.mjs), so the server's event loop is not also the load generator's. Prints requests
+ * per second and p50/p95/p99 latency per scenario, then stops. `--profile DIR` writes a CPU profile of the
+ * server's thread while the load runs (open it in Chrome DevTools or speedscope).
  */
-import { mkdtempSync, rmSync } from 'node:fs';
-import { createRequire } from 'node:module';
+import { mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { Session as Inspector } from 'node:inspector/promises';
 import os from 'node:os';
 import path from 'node:path';
+import { Worker } from 'node:worker_threads';
 import { loadConfig } from '../server/config.ts';
 import { startCluster } from '../server/db/cluster.ts';
 import { freePort } from '../server/db/free-port.ts';
 import { startServer } from '../server/index.ts';
 import { DEMO_USERS } from '../server/seed/accounts.ts';
 
-/** The slice of autocannon's API used here (the package ships no types). */
-interface AutocannonClient {
-  setHeaders(headers: Record<string, string>): void;
-}
-interface AutocannonRequest {
-  method?: string;
-  path?: string;
-  headers?: Record<string, string>;
-  body?: string;
-}
-interface AutocannonOptions {
-  url: string;
-  connections: number;
-  duration: number;
-  method?: string;
-  body?: string;
-  headers?: Record<string, string>;
-  requests?: { setupRequest?: (req: AutocannonRequest) => AutocannonRequest }[];
-  setupClient?: (client: AutocannonClient) => void;
-}
-interface AutocannonResult {
-  requests: { total: number; average: number };
-  non2xx: number;
-  errors: number;
-  timeouts: number;
-  duration: number;
-}
-interface AutocannonInstance extends Promise<AutocannonResult> {
-  on(event: 'response', cb: (client: unknown, status: number, bytes: number, ms: number) => void): void;
-}
-const autocannon = createRequire(import.meta.url)('autocannon') as (o: AutocannonOptions) => AutocannonInstance;
-
 interface Session {
   cookie: string;
   csrf: string;
 }
 
-function args(argv: string[]): { connections: number; seconds: number } {
+interface Scenario {
+  name: string;
+  method: 'GET' | 'POST';
+  /** Paths visited in turn, so the pages differ as a user's would. */
+  paths: string[];
+  body?: string;
+}
+
+/** One row of the table, as bench/load-driver.mjs posts it. */
+type DriveResult = Record<'requests' | 'req/s' | 'p50 ms' | 'p95 ms' | 'p99 ms' | 'non-2xx' | 'errors', number> & { scenario: string };
+
+function args(argv: string[]): { connections: number; seconds: number; profile?: string } {
   const get = (name: string, fallback: number) => {
     const i = argv.indexOf(`--${name}`);
     const v = i >= 0 ? Number(argv[i + 1]) : fallback;
     if (!Number.isInteger(v) || v < 1 || v > 1000) throw new Error(`--${name}: must be an integer from 1 to 1000`);
     return v;
   };
-  return { connections: get('connections', 16), seconds: get('seconds', 10) };
+  const p = argv.indexOf('--profile');
+  return { connections: get('connections', 16), seconds: get('seconds', 10), profile: p >= 0 ? argv[p + 1] : undefined };
 }
 
 /** Cookie jar of one client: the latest value of every cookie set so far. */
@@ -70,7 +54,8 @@ function merge(jar: Map<string, string>, res: Response): void {
   }
 }
 
-async function signIn(url: string, email: string, password: string): Promise<Session> {
+/** Signs in through the API as a browser would (CSRF token, then the rotated session's token); also used by bench lighthouse. */
+export async function signIn(url: string, email: string, password: string): Promise<Session> {
   const jar = new Map<string, string>();
   const cookie = () => [...jar].map(([k, v]) => `${k}=${v}`).join('; ');
   const csrf = async () => {
@@ -95,55 +80,41 @@ async function getJson<T>(url: string, session: Session): Promise<T> {
   return (await res.json()) as T;
 }
 
-const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1))] ?? NaN;
-
-interface Scenario {
-  name: string;
-  method: 'GET' | 'POST';
-  /** Paths visited in turn, so the pages differ as a user's would. */
-  paths: string[];
-  body?: string;
+/**
+ * CPU time the server's main thread has used, in ms (Linux: /proc, user + system, 10 ms ticks). Divided by the
+ * requests served it gives the stack's cost per request, which moves far less with the machine's load than
+ * latency does (the load generator runs on another thread and is not counted).
+ */
+function serverThreadCpuMs(): number {
+  try {
+    const stat = readFileSync(`/proc/${process.pid}/task/${process.pid}/stat`, 'utf8');
+    const fields = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
+    return (Number(fields[11]) + Number(fields[12])) * 10;
+  } catch {
+    return NaN;
+  }
 }
 
-async function drive(url: string, sessions: Session[], s: Scenario, connections: number, seconds: number) {
-  let next = 0;
-  let visit = 0;
-  const latencies: number[] = [];
-  const instance = autocannon({
-    url,
-    connections,
-    duration: seconds,
-    method: s.method,
-    body: s.body,
-    headers: { 'content-type': 'application/json' },
-    // One signed-in session per connection.
-    setupClient: (client) => {
-      const session = sessions[next++ % sessions.length]!;
-      client.setHeaders({ cookie: session.cookie, 'x-csrf-token': session.csrf, 'content-type': 'application/json' });
-    },
-    requests: [{ setupRequest: (req) => ({ ...req, path: s.paths[visit++ % s.paths.length] }) }],
+/** One scenario driven from a worker thread; resolves with its row. */
+function drive(url: string, sessions: Session[], scenario: Scenario, connections: number, seconds: number): Promise<DriveResult> {
+  return new Promise((resolve, reject) => {
+    const worker = new Worker(new URL('./load-driver.mjs', import.meta.url), { workerData: { url, sessions, scenario, connections, seconds } });
+    worker.once('message', (row: DriveResult) => resolve(row));
+    worker.once('error', reject);
+    worker.once('exit', (code) => (code === 0 ? undefined : reject(new Error(`load driver exited ${code}`))));
   });
-  instance.on('response', (_c, _status, _bytes, ms) => latencies.push(ms));
-  const result = await instance;
-  latencies.sort((a, b) => a - b);
-  return {
-    scenario: s.name,
-    requests: result.requests.total,
-    'req/s': Math.round(result.requests.total / seconds),
-    'p50 ms': +percentile(latencies, 50).toFixed(1),
-    'p95 ms': +percentile(latencies, 95).toFixed(1),
-    'p99 ms': +percentile(latencies, 99).toFixed(1),
-    'non-2xx': result.non2xx,
-    errors: result.errors + result.timeouts,
-  };
 }
 
 export async function run(argv: string[]): Promise<void> {
-  const { connections, seconds } = args(argv);
+  const { connections, seconds, profile } = args(argv);
   const dir = mkdtempSync(path.join(os.tmpdir(), 'lobewise-bench-load-'));
   const cluster = await startCluster({ dataDir: dir, port: await freePort(), database: 'lobewise_bench', durable: false });
   const server = await startServer(
-    loadConfig({ NODE_ENV: 'production', DATABASE_URL: cluster.url, PORT: '0', SMTP_FAKE_PORT: '0', LOG_LEVEL: 'warn', SESSION_SECRET: 'bench-secret-0123456789abcdef' }),
+    loadConfig({
+      NODE_ENV: 'production', DATABASE_URL: cluster.url, PORT: '0', SMTP_FAKE_PORT: '0', LOG_LEVEL: 'warn', SESSION_SECRET: 'bench-secret-0123456789abcdef',
+      // The N clients stand for N people but share one demo account: let each have its one evaluation open.
+      HEAVY_REQUESTS_PER_USER: String(Math.min(64, connections)),
+    }),
   );
   try {
     const engineer = DEMO_USERS.find((u) => u.role === 'engineer')!;
@@ -162,10 +133,13 @@ export async function run(argv: string[]): Promise<void> {
         const offset = ((i * 37) % Math.max(1, Math.floor(total / 50))) * 50;
         const sort = sorts[i % sorts.length];
         const filter = i % 3 === 0 ? '&filter[nx]=4..64' : '';
-        return `/api/sweeps/${sweep!.id}/${kind}?offset=${offset}&limit=50${sort ? `&sort=${sort}` : ''}${filter}`;
+        // Half the design pages judged over a scan window, as the trade table asks when the study has a target sheet.
+        const window = kind === 'designs' && i % 2 === 1 ? '&scanAz=-45..45' : '';
+        return `/api/sweeps/${sweep!.id}/${kind}?offset=${offset}&limit=50${sort ? `&sort=${sort}` : ''}${filter}${window}`;
       });
     const design = { frequencyGHz: 28, nx: 8, ny: 4, dxMm: 5.35, taperX: { kind: 'taylor', sllDb: 25, nbar: 4 }, phaseBits: 6, element: { kind: 'cosine', q: 1.5 }, steerAzDeg: 30, channelPowerDbm: 10 };
     const scenarios: Scenario[] = [
+      { name: 'GET /api/me (signed in)', method: 'GET', paths: ['/api/me'] },
       { name: 'trade table: GET designs page', method: 'GET', paths: pages('designs', sweep.designsTotal, ['scanLossEdgeDb:asc', 'worstSllDb:desc', 'nx:asc', '']) },
       { name: 'points: GET results page', method: 'GET', paths: pages('results', sweep.pointsTotal, ['scanLossDb:asc', 'eirpDbm:desc', '']) },
       { name: 'POST /api/evaluate (8×4 design)', method: 'POST', paths: ['/api/evaluate'], body: JSON.stringify(design) },
@@ -173,8 +147,26 @@ export async function run(argv: string[]): Promise<void> {
     process.stdout.write(
       `${connections} signed-in clients, ${seconds} s per scenario; demo sweep ${sweep.designsTotal} designs / ${sweep.pointsTotal} points; ${os.cpus().length} CPUs\n`,
     );
+    const inspector = profile ? new Inspector() : undefined;
+    if (inspector) {
+      inspector.connect();
+      await inspector.post('Profiler.enable');
+      await inspector.post('Profiler.start');
+    }
     const rows = [];
-    for (const s of scenarios) rows.push(await drive(server.url, sessions, s, connections, seconds));
+    for (const s of scenarios) {
+      const cpu0 = serverThreadCpuMs();
+      const row = await drive(server.url, sessions, s, connections, seconds);
+      rows.push({ ...row, 'server CPU ms/req': +((serverThreadCpuMs() - cpu0) / Math.max(1, row.requests)).toFixed(2) });
+    }
+    if (inspector && profile) {
+      const { profile: cpu } = await inspector.post('Profiler.stop');
+      mkdirSync(profile, { recursive: true });
+      const file = path.join(profile, `load-${Date.now()}.cpuprofile`);
+      writeFileSync(file, JSON.stringify(cpu));
+      process.stdout.write(`CPU profile of the server thread: ${file}\n`);
+    }
+    process.stdout.write(`load average ${os.loadavg().map((l) => l.toFixed(2)).join(' ')}\n`);
     console.table(rows);
   } finally {
     await server.close();
