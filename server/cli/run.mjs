@@ -88,7 +88,11 @@ async function bundledEntry() {
   } catch {
     /* no usable cache: build below */
   }
-  mkdirSync(dir, { recursive: true });
+  try {
+    mkdirSync(dir, { recursive: true });
+  } catch {
+    return null; // nowhere to keep a bundle (read-only install): run the sources through tsx
+  }
   // Each build gets its own folder, published by renaming the pointer file, so a process starting meanwhile
   // never loads half a build. Folders of earlier builds are removed once they are an hour old.
   const outdir = path.join(dir, `${key}-${Date.now().toString(36)}-${process.pid}`);
@@ -112,8 +116,12 @@ async function bundledEntry() {
     });
   const tmp = `${pointer}.${process.pid}.tmp`;
   const built = { file: path.join(outdir, 'index.js'), tsx: commandsNeedingTsx(result.metafile), outdir, inputs };
-  writeFileSync(tmp, JSON.stringify(built));
-  renameSync(tmp, pointer);
+  try {
+    writeFileSync(tmp, JSON.stringify(built));
+    renameSync(tmp, pointer);
+  } catch {
+    return built; // usable now, rebuilt next time
+  }
   for (const name of readdirSync(dir)) {
     const old = path.join(dir, name);
     if (!name.startsWith(`${key}-`) || old === outdir) continue;
