@@ -60,7 +60,8 @@ function commandsNeedingTsx(metafile) {
   const reaches = (file, seen = new Set()) => {
     if (seen.has(file)) return false;
     seen.add(file);
-    return (outputs[file]?.imports ?? []).some((i) => (i.external ? i.path.startsWith('file:') : i.kind === 'import-statement' && reaches(i.path, seen)));
+    // Dynamic imports are followed too: a command that loads the database later still needs tsx from the start.
+    return (outputs[file]?.imports ?? []).some((i) => (i.external ? i.path.startsWith('file:') : reaches(i.path, seen)));
   };
   const names = [];
   for (const [file, out] of Object.entries(outputs)) {
