@@ -95,7 +95,7 @@ async function bundledEntry() {
     return null; // nowhere to keep a bundle (read-only install): run the sources through tsx
   }
   // Each build gets its own folder, published by renaming the pointer file, so a process starting meanwhile
-  // never loads half a build. Folders of earlier builds are removed once they are an hour old.
+  // never loads half a build. What earlier builds left is removed once it is an hour old.
   const outdir = path.join(dir, `${key}-${Date.now().toString(36)}-${process.pid}`);
   let result;
   try {
@@ -125,7 +125,7 @@ async function bundledEntry() {
   }
   for (const name of readdirSync(dir)) {
     const old = path.join(dir, name);
-    if (!name.startsWith(`${key}-`) || old === outdir) continue;
+    if (old === outdir || name === path.basename(pointer)) continue; // earlier builds and other versions' caches
     try {
       if (statSync(old).mtimeMs < Date.now() - 3600_000) rmSync(old, { recursive: true, force: true });
     } catch {
