@@ -5,6 +5,7 @@ const benches: Record<string, () => Promise<{ run: (argv: string[]) => Promise<v
   results: () => import('./results.ts'),
   load: () => import('./load.ts'),
   password: () => import('./password.ts'),
+  health: () => import('./health.ts'),
   coverage: () => import('./coverage.ts'),
   pages: () => import('./pages.ts'),
   lighthouse: () => import('./lighthouse.ts'),
