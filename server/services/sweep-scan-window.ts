@@ -34,11 +34,15 @@ const SUMMARY_SQL: Record<string, string> = {
   grating_lobe_visible_any: `CASE WHEN bool_or(ok) THEN coalesce(bool_or(grating_lobe_visible) FILTER (WHERE ${OK}), false) END`,
   peak_eirp_dbm: `max(eirp_dbm) FILTER (WHERE ${OK})`,
   min_eirp_dbm: `min(eirp_dbm) FILTER (WHERE ${OK})`,
-  edge_eirp_dbm: `min(eirp_dbm) FILTER (WHERE ${AT_EDGE})`,
+  edge_eirp_dbm: `min(coalesce(eirp_at_steer_dbm, eirp_dbm)) FILTER (WHERE ${AT_EDGE})`,
   aperture_x_mm: first('aperture_x_mm'),
   aperture_y_mm: first('aperture_y_mm'),
   channels: first('channels'),
   max_pointing_error_deg: `max(pointing_error_deg) FILTER (WHERE ${OK})`,
+  gain_max_dbi: `max(gain_dbi) FILTER (WHERE ${OK})`,
+  gain_at_steer_min_dbi: `min(gain_at_steer_dbi) FILTER (WHERE ${OK})`,
+  pointing_loss_max_db: `max(pointing_loss_db) FILTER (WHERE ${OK})`,
+  min_eirp_at_steer_dbm: `min(eirp_at_steer_dbm) FILTER (WHERE ${OK})`,
 };
 
 // A summary column added to columns.ts without an aggregate here would silently read as missing: fail at load.
@@ -48,7 +52,7 @@ if (missing.length > 0) throw new Error(`scan window has no aggregate for ${miss
 const POINT_METRICS = [
   'scan_loss_db', 'hpbw_az_deg', 'hpbw_el_deg', 'peak_sll_db', 'directivity_dbi', 'grating_lobe_onset_az_deg',
   'grating_lobe_onset_el_deg', 'grating_lobe_visible', 'eirp_dbm', 'aperture_x_mm', 'aperture_y_mm', 'channels',
-  'pointing_error_deg',
+  'pointing_error_deg', 'gain_dbi', 'gain_at_steer_dbi', 'pointing_loss_db', 'eirp_at_steer_dbm',
 ];
 
 /**

@@ -20,6 +20,7 @@ export { attenuatorCode, attenuatedAmplitude } from './gain/attenuator-code.ts';
 export { conductedPowerDbm } from './gain/conducted-power-dbm.ts';
 export { elementGainDbi } from './gain/element-gain-dbi.ts';
 export { gainModel, type GainModel } from './gain/gain-model.ts';
+export { gainVsSteer } from './gain/gain-vs-steer.ts';
 export { unitCellGainDbi } from './gain/unit-cell-gain-dbi.ts';
 export { tablePatternDbiAt } from './element/table-pattern.ts';
 export type { Design, DesignInput, Taper, Element } from '../schemas/design.ts';

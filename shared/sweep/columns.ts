@@ -27,6 +27,8 @@ export const DESIGN_PARAM_COLUMNS: ColumnDef[] = [
   col('grouping', 'grouping', 'text'),
   col('element', 'element', 'text'),
   col('channelPowerDbm', 'channel_power_dbm', 'float'),
+  col('attenuatorStepDb', 'attenuator_step_db', 'float'),
+  col('attenuatorBits', 'attenuator_bits', 'int'),
 ];
 
 export const STEER_COLUMNS: ColumnDef[] = [col('steerAzDeg', 'steer_az_deg', 'float'), col('steerElDeg', 'steer_el_deg', 'float')];
@@ -53,6 +55,12 @@ export const METRIC_COLUMNS: ColumnDef[] = [
   col('apertureXMm', 'aperture_x_mm', 'float'),
   col('apertureYMm', 'aperture_y_mm', 'float'),
   col('eirpDbm', 'eirp_dbm', 'float'),
+  col('elementGainDbi', 'element_gain_dbi', 'float'),
+  col('gainDbi', 'gain_dbi', 'float'),
+  col('gainAtSteerDbi', 'gain_at_steer_dbi', 'float'),
+  col('pointingLossDb', 'pointing_loss_db', 'float'),
+  col('conductedPowerDbm', 'conducted_power_dbm', 'float'),
+  col('eirpAtSteerDbm', 'eirp_at_steer_dbm', 'float'),
 ];
 
 export const POINT_COLUMNS: ColumnDef[] = [
@@ -87,6 +95,10 @@ export const DESIGN_SUMMARY_COLUMNS: ColumnDef[] = [
   col('apertureYMm', 'aperture_y_mm', 'float'),
   col('channels', 'channels', 'int'),
   col('maxPointingErrorDeg', 'max_pointing_error_deg', 'float'),
+  col('gainMaxDbi', 'gain_max_dbi', 'float'),
+  col('gainAtSteerMinDbi', 'gain_at_steer_min_dbi', 'float'),
+  col('pointingLossMaxDb', 'pointing_loss_max_db', 'float'),
+  col('minEirpAtSteerDbm', 'min_eirp_at_steer_dbm', 'float'),
 ];
 
 /**
@@ -114,8 +126,9 @@ type Labelled = { kind: string } & Record<string, unknown>;
 /** `uniform`, `taylor(25,4)`, `chebyshev(30)`, `cosine(1.5)`: sortable and filterable as text. */
 export function kindLabel(v: Labelled): string {
   const args = Object.entries(v)
-    .filter(([k]) => k !== 'kind')
-    .map(([, x]) => String(x));
+    // A table element's resolved values stay out of the label (its patternId names it).
+    .filter(([k, x]) => k !== 'kind' && k !== 'pattern' && x !== undefined)
+    .map(([k, x]) => (k === 'gainDbi' ? `${String(x)}dBi` : String(x)));
   return args.length === 0 ? v.kind : `${v.kind}(${args.join(',')})`;
 }
 

@@ -1,6 +1,8 @@
 /**
  * One row of the trade table: a design's worst cases over its steering angles.
  * "Edge of scan" is the steer farthest from broadside (cos θ0 = cos az · cos el); ties take the worse value.
+ * Edge-of-scan EIRP is the EIRP toward the intended steer there (what a link at the edge gets), not the peak's;
+ * points without it (explicit codes, rows stored before it existed) count their peak EIRP, as the target figures do.
  */
 import type { PointResult } from './chunk.ts';
 
@@ -48,10 +50,14 @@ export function summariseDesign(points: PointResult[]): DesignSummary {
     gratingLobeVisibleAny: ok.length ? ok.some((p) => p.metrics!.gratingLobeVisible === true) : null,
     peakEirpDbm: maxOf(m('eirpDbm')),
     minEirpDbm: minOf(m('eirpDbm')),
-    edgeEirpDbm: minOf(atEdge('eirpDbm')),
+    edgeEirpDbm: minOf(edge.map((p) => (p.metrics!.eirpAtSteerDbm ?? p.metrics!.eirpDbm) as number | null)),
     apertureXMm: (first?.apertureXMm as number | undefined) ?? null,
     apertureYMm: (first?.apertureYMm as number | undefined) ?? null,
     channels: (first?.channels as number | undefined) ?? null,
     maxPointingErrorDeg: maxOf(m('pointingErrorDeg')),
+    gainMaxDbi: maxOf(m('gainDbi')),
+    gainAtSteerMinDbi: minOf(m('gainAtSteerDbi')),
+    pointingLossMaxDb: maxOf(m('pointingLossDb')),
+    minEirpAtSteerDbm: minOf(m('eirpAtSteerDbm')),
   };
 }

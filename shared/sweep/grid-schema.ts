@@ -45,6 +45,8 @@ export const SweepGridShapeSchema = z
       element: oneOrList(ElementSchema).optional(),
       codes: codeLists.optional(),
       channelPowerDbm: oneOrList(nullableNum).optional(),
+      attenuatorStepDb: oneOrList(num).optional(),
+      attenuatorBits: oneOrList(int).optional(),
       steerAzDeg: oneOrList(num).optional(),
       steerElDeg: oneOrList(num).optional(),
     },

@@ -13,7 +13,7 @@ import type { SweepConstraints, SweepGridShape } from './grid-schema.ts';
 
 /** Non-steering fields, slowest first. */
 export const DESIGN_FIELDS = [
-  'frequencyGHz', 'nx', 'ny', 'dxMm', 'dyMm', 'taperX', 'taperY', 'phaseBits', 'grouping', 'element', 'codes', 'channelPowerDbm',
+  'frequencyGHz', 'nx', 'ny', 'dxMm', 'dyMm', 'taperX', 'taperY', 'phaseBits', 'grouping', 'element', 'codes', 'channelPowerDbm', 'attenuatorStepDb', 'attenuatorBits',
 ] as const;
 export const STEER_FIELDS = ['steerAzDeg', 'steerElDeg'] as const;
 export type GridField = (typeof DESIGN_FIELDS)[number] | (typeof STEER_FIELDS)[number];

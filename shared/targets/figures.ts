@@ -50,6 +50,8 @@ export interface PointMetrics {
   apertureYMm: number;
   channels: number;
   eirpDbm: number | null;
+  /** EIRP toward the intended steer; absent on points stored before it existed (then the peak EIRP stands in). */
+  eirpAtSteerDbm?: number | null;
   scanLossDb: number;
   hpbwAzDeg: number;
   hpbwElDeg: number;
@@ -104,7 +106,8 @@ export function figuresFromPoints(points: readonly FigurePoint[], options: Figur
     apertureYMm: first?.apertureYMm ?? null,
     channels: first?.channels ?? null,
     peakEirpDbm: maxOf(finite(m.map((x) => x.eirpDbm))),
-    edgeEirpDbm: minOf(finite(atEdge.map((p) => p.metrics.eirpDbm))),
+    // A link at the edge of scan gets the EIRP toward the steer, not the (squinted) peak's.
+    edgeEirpDbm: minOf(finite(atEdge.map((p) => p.metrics.eirpAtSteerDbm ?? p.metrics.eirpDbm))),
     scanLossEdgeDb: maxOf(finite(atEdge.map((p) => p.metrics.scanLossDb))),
     hpbwAzMinDeg: minOf(finite(m.map((x) => x.hpbwAzDeg))),
     hpbwAzMaxDeg: maxOf(finite(m.map((x) => x.hpbwAzDeg))),

@@ -5,6 +5,8 @@
  * Without Worker support (tests, old browsers) it computes on the main thread.
  */
 import { onBeforeUnmount, ref, shallowRef, watch, type Ref } from 'vue';
+import { getActivePinia } from 'pinia';
+import { useElementPatternsStore } from '@/stores/element-patterns';
 import type { DesignInput } from '@shared/schemas/design.ts';
 import type { DesignFigures, ScanRange } from '@shared/targets/index.ts';
 import { computePreview, type PreviewRequest, type PreviewResult } from '@/workers/preview-compute.ts';
@@ -73,12 +75,20 @@ export function usePreview(source: Ref<PreviewSource | null>, options: { debounc
     }
   }
 
+  // A table element names its pattern by id: fill in the values (fetched once per pattern) before evaluating.
+  const patterns = getActivePinia() ? useElementPatternsStore() : null;
+  let asked = 0;
   watch(
     source,
     (value) => {
       clearTimeout(timer);
       if (!value) return;
-      timer = setTimeout(() => run({ design: value.design, scanAzDeg: value.scanAzDeg, scanElDeg: value.scanElDeg }), options.debounceMs ?? PREVIEW_DEBOUNCE_MS);
+      timer = setTimeout(() => {
+        const mine = ++asked;
+        void (patterns ? patterns.resolve(value.design) : Promise.resolve(value.design)).then((design) => {
+          if (mine === asked) run({ design, scanAzDeg: value.scanAzDeg, scanElDeg: value.scanElDeg });
+        });
+      }, options.debounceMs ?? PREVIEW_DEBOUNCE_MS);
     },
     { deep: true, immediate: true },
   );

@@ -69,4 +69,14 @@ describe('figuresFromPoints(points)', () => {
     expect(f.scanAzMaxDeg).toBe(0);
     expect(f.scanLossEdgeDb).toBe(0);
   });
+  it('takes the edge-of-scan EIRP toward the steer when points carry it, not the peak EIRP', () => {
+    // Hand values: at ±45° the peak EIRPs are 22 and 22.3, the EIRPs toward the steer 20.1 and 20.4: the worse is 20.1.
+    const f = figuresFromPoints([
+      point(0, 0, { eirpDbm: 26, eirpAtSteerDbm: 26 }),
+      point(-45, 0, { eirpDbm: 22, eirpAtSteerDbm: 20.1 }),
+      point(45, 0, { eirpDbm: 22.3, eirpAtSteerDbm: 20.4 }),
+    ]);
+    expect(f.edgeEirpDbm).toBe(20.1);
+    expect(f.peakEirpDbm).toBe(26);
+  });
 });

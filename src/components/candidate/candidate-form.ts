@@ -58,6 +58,7 @@ export const ELEMENT_KINDS = [
   { value: 'isotropic', label: 'Isotropic' },
   { value: 'cosine', label: 'Cosine (cosᵠ θ)' },
   { value: 'tr38901', label: '3GPP TR 38.901 element' },
+  { value: 'table', label: 'Uploaded pattern (table)' },
 ] as const;
 
 export function elementOfKind(kind: Element['kind'], previous?: Element): Element {
