@@ -3,7 +3,10 @@ import { Router, type Request } from 'express';
 import type { AppContext } from '../context.ts';
 import { requireAuth, requireRole } from '../middleware/require-auth.ts';
 import { validate } from '../middleware/validate.ts';
-import { createDevice, deleteDevice, getDevice, listDevices, patchDevice } from '../services/device-service.ts';
+import { createDevice, deleteDevice, getDevice, listDevices, patchDevice, sweepDevice } from '../services/device-service.ts';
+import { deviceSweepQueueFull } from '../devices/device-sweep-pool.ts';
+import { ApiError } from '../errors.ts';
+import { DeviceSweepRequestSchema, type DeviceSweepRequest } from '../../shared/devices/device-sweep.ts';
 import { DeviceCreateSchema, DevicePatchSchema, type DeviceCreate, type DevicePatch } from '../../shared/schemas/device.ts';
 import { IdParamsSchema } from '../../shared/schemas/study.ts';
 
@@ -29,6 +32,19 @@ export function devicesRouter(ctx: AppContext): Router {
   });
   router.patch('/:id', requireRole('engineer'), id, validate({ body: DevicePatchSchema }), async (req, res) => {
     res.json(await patchDevice(ctx, req.user!, idOf(req), req.body as DevicePatch));
+  });
+  // Reading is enough: a sweep stores nothing, it answers the variants' coverage rows.
+  router.post('/:id/sweep', requireAuth, id, validate({ body: DeviceSweepRequestSchema }), async (req, res) => {
+    if (deviceSweepQueueFull()) throw new ApiError(503, 'busy', 'sweep: too many device computations waiting; try again shortly');
+    const abort = new AbortController();
+    res.on('close', () => {
+      if (!res.writableEnded) abort.abort();
+    });
+    try {
+      res.json(await sweepDevice(ctx, req.user!, idOf(req), req.body as DeviceSweepRequest, abort.signal));
+    } catch (err) {
+      if (!abort.signal.aborted) throw err;
+    }
   });
   router.delete('/:id', requireRole('engineer'), id, async (req, res) => {
     await deleteDevice(ctx, req.user!, idOf(req));

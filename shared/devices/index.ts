@@ -3,3 +3,5 @@ export { deviceCoverage, DeviceCoverageError, DEVICE_PERCENTILES, type DeviceCov
 export { deviceFigures } from './device-figures.ts';
 export { deviceRegion } from './device-region.ts';
 export { moduleBeams, type ModuleBeams } from './module-beams.ts';
+export { deviceCodesCsv, type CodedModule } from './device-codes-csv.ts';
+export { DeviceSweepRequestSchema, deviceSweepVariants, deviceSweepRow, MAX_DEVICE_SWEEP_VARIANTS, DEVICE_SWEEP_FIELDS, type DeviceSweepRequest, type DeviceSweepRow, type DeviceSweepField } from './device-sweep.ts';

@@ -35,6 +35,15 @@ const DESIGN = {
   channelPowerDbm: 10,
 };
 
+/** A device layout on the fixture candidate: one grid module and one fill module. */
+const DEVICE_LAYOUT = (ids: Record<string, string>) => ({
+  outline: { widthMm: 72, heightMm: 150, depthMm: 8 },
+  modules: [
+    { candidateId: ids.candidateId, face: 'right', u: 0.5, v: 0.7, codebook: { kind: 'grid', grid: 'az -45:45:15 × el 0' } },
+    { candidateId: ids.candidateId, face: 'left', u: 0.5, v: 0.3, codebook: { kind: 'fill', crossoverDb: 3, azMinDeg: -60, azMaxDeg: 60, elMinDeg: -30, elMaxDeg: 30 } },
+  ],
+});
+
 /** A valid body per state-changing route; every leaf is then spoiled one at a time. */
 const BODIES: Record<string, BodySpec> = {
   'POST /api/evaluate': { body: () => ({ ...DESIGN }) },
@@ -82,12 +91,15 @@ const BODIES: Record<string, BodySpec> = {
     body: (ids) => ({ name: 'Phone', notes: 'n', targetSheetId: ids.sheetId, layout: DEVICE_LAYOUT(ids) }),
     allowEmpty: ['notes'],
   },
+  'POST /api/devices/:id/sweep': { body: () => ({ moduleIndex: 0, vary: { nx: [4, 6], channelPowerDbm: [10] } }) },
   'PATCH /api/devices/:id': { body: (ids) => ({ name: 'Phone 2', notes: 'n', layout: DEVICE_LAYOUT(ids) }), allowEmpty: ['notes'] },
   'POST /api/studies/:id/target-sheets': {
     body: () => ({ preset: null, sheet: { name: 'Small cell', minSectorEirpDbm: 43, serviceSector: { azMinDeg: -50, azMaxDeg: 50, elMinDeg: -10, elMaxDeg: 10 } } }),
+    allowEmpty: ['sheet.name'],
   },
   'PUT /api/studies/:id/target-sheets/:sheetId': {
     body: () => ({ preset: 'handset-28ghz', sheet: { name: 'Handset', band: 'n257', minPeakEirpDbm: 22.4, minCoverageP50EirpDbm: 11.5 } }),
+    allowEmpty: ['sheet.name'],
   },
   'POST /api/studies/:id/sweeps': {
     body: () => ({ name: 'Spoilt sweep', grid: { frequencyGHz: 28, nx: [4, 8], dxMm: 5.35, steerAzDeg: [0, 30] }, constraints: { maxChannels: 64, maxApertureXMm: 100 } }),

@@ -253,9 +253,12 @@ export const matrix: MatrixRow[] = [
   { method: 'PUT', path: '/api/studies/:id/target-sheets/:sheetId', params: { id: 'studyId' }, body: { preset: null, sheet: { name: 'Renamed' } }, anonymous: 401, reviewer: 403, engineer: 200, admin: 200, otherTeam: 404 },
   { method: 'DELETE', path: '/api/studies/:id/target-sheets/:sheetId', params: { id: 'studyId' }, anonymous: 401, reviewer: 403, engineer: 204, admin: 204, otherTeam: 404 },
   { method: 'GET', path: '/api/studies/:id/devices', params: { id: 'studyId' }, ...member(200), otherTeam: 404 },
-  { method: 'POST', path: '/api/studies/:id/devices', params: { id: 'studyId' }, body: {}, anonymous: 401, reviewer: 403, engineer: 400, admin: 400, otherTeam: 404 },
+  // An empty body fails validation before the study is looked up, so another team also hears 400.
+  { method: 'POST', path: '/api/studies/:id/devices', params: { id: 'studyId' }, body: {}, anonymous: 401, reviewer: 403, engineer: 400, admin: 400, otherTeam: 400 },
   { method: 'GET', path: '/api/devices/:id', params: { id: 'deviceId' }, ...member(200), otherTeam: 404 },
   { method: 'PATCH', path: '/api/devices/:id', params: { id: 'deviceId' }, body: { name: 'Renamed' }, anonymous: 401, reviewer: 403, engineer: 200, admin: 200, otherTeam: 404 },
+  // The fixture's candidate has no power per channel, so a member past the access check hears 400 (nothing to judge).
+  { method: 'POST', path: '/api/devices/:id/sweep', params: { id: 'deviceId' }, body: { moduleIndex: 0, vary: { nx: [4] } }, ...member(400), otherTeam: 404 },
   { method: 'DELETE', path: '/api/devices/:id', params: { id: 'deviceId' }, anonymous: 401, reviewer: 403, engineer: 204, admin: 204, otherTeam: 404 },
   { method: 'GET', path: '/api/candidates/:id', params: { id: 'candidateId' }, ...member(200), otherTeam: 404 },
   { method: 'PATCH', path: '/api/candidates/:id', params: { id: 'candidateId' }, body: {}, anonymous: 401, reviewer: 403, engineer: 200, admin: 200, otherTeam: 404 },

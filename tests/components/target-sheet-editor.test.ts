@@ -84,8 +84,7 @@ describe('TargetSheetEditor', () => {
     server([sheetRow('a', 'Handset', 0)]);
     const w = mount(TargetSheetEditor, { props: { studyId: 's1', canEdit: true }, global: { plugins: [Antd] } });
     await flushPromises();
-    const bandSelect = w.findAllComponents({ name: 'ASelect' }).find((c) => c.attributes('aria-label') === 'Band' || c.props('ariaLabel') === 'Band')!;
-    bandSelect.vm.$emit('update:value', 'n260');
+    await w.find('select[aria-label="Band"]').setValue('n260');
     await flushPromises();
     // 3GPP TS 38.101-2 Tables 6.2.1.3-1 and 6.2.1.3-3, PC3 n260 (recalled from memory): 20.6 dBm peak, 8 dBm at the 50th percentile.
     expect((w.find('input[aria-label="Min peak EIRP (dBm)"]').element as HTMLInputElement).value).toBe('20.6');
