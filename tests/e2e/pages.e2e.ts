@@ -53,6 +53,8 @@ describe('every page opens without console errors', () => {
     // Every tab the study shows, whatever tabs exist when this runs.
     const tabs = await page.getByRole('tab').allInnerTexts();
     expect(tabs.length).toBeGreaterThanOrEqual(5);
+    // The study's several target sheets and its devices each have a tab of their own.
+    expect(tabs).toEqual(expect.arrayContaining(['Target sheets', 'Devices']));
     for (const [i, label] of tabs.entries()) {
       const from = problems.length;
       // The study's own tabs come first; a panel may hold tabs of its own (exact names keep them apart).
