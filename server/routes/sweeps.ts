@@ -10,7 +10,7 @@ import { eventStreamSlot, streamProgress } from '../sweeps/progress-stream.ts';
 import { requireAuth, requireRole } from '../middleware/require-auth.ts';
 import { validate } from '../middleware/validate.ts';
 import { listDesigns, listPoints, writePointsCsv } from '../services/sweep-results.ts';
-import { cachedPage, pageKey, sweepStateFor } from '../services/sweep-page-cache.ts';
+import { cachedPage, pageKey, sendPage, sweepStateFor } from '../services/sweep-page-cache.ts';
 import { cancelSweep, createSweep, findSweepFor, getSweep, listSweeps } from '../services/sweep-service.ts';
 
 const id = validate({ params: SweepIdParamsSchema });
@@ -35,17 +35,17 @@ export function sweepsRouter(ctx: AppContext): Router {
   // Pages of a finished sweep come from the page cache (access checked on every request; see sweep-page-cache.ts).
   router.get('/sweeps/:id/results', requireAuth, id, validate({ query: PointsQuerySchema }), async (req, res) => {
     const state = await sweepStateFor(ctx, req.user!, idOf(req));
-    const json = await cachedPage(pageKey('points', state, JSON.stringify(queryOf(req))), async () =>
+    const page = await cachedPage(pageKey('points', state, JSON.stringify(queryOf(req))), async () =>
       listPoints(ctx, await findSweepFor(ctx, req.user!, idOf(req), 'read'), queryOf(req)),
     );
-    res.type('json').send(json);
+    sendPage(res, page);
   });
   router.get('/sweeps/:id/designs', requireAuth, id, validate({ query: DesignsQuerySchema }), async (req, res) => {
     const state = await sweepStateFor(ctx, req.user!, idOf(req));
-    const json = await cachedPage(pageKey('designs', state, JSON.stringify(queryOf(req))), async () =>
+    const page = await cachedPage(pageKey('designs', state, JSON.stringify(queryOf(req))), async () =>
       listDesigns(ctx, await findSweepFor(ctx, req.user!, idOf(req), 'read'), queryOf(req)),
     );
-    res.type('json').send(json);
+    sendPage(res, page);
   });
   router.get('/sweeps/:id/results.csv', requireAuth, id, async (req, res) => {
     const sweep = await findSweepFor(ctx, req.user!, idOf(req), 'read');

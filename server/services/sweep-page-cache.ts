@@ -9,6 +9,8 @@
  * Access is still checked on every request, by one query (`sweepStateFor`): the same rule as findStudyFor
  * (team, visibility, share), with the sweep's state read in the same round trip.
  */
+import { createHash } from 'node:crypto';
+import type { Response } from 'express';
 import type { AuthUser } from '../auth/types.ts';
 import type { AppContext } from '../context.ts';
 import type { ShareAccess } from '../entities/study-share.ts';
@@ -42,7 +44,15 @@ export async function sweepStateFor(ctx: AppContext, user: AuthUser, sweepId: st
   return { id: row.id, status: row.status, pointsDone: row.pointsDone, costModelVersion: row.costModelVersion, currentCostVersion: row.currentCostVersion };
 }
 
-const pages = new Map<string, string>();
+/** A page as sent: the JSON bytes and their entity tag (computed once, not hashed again per request). */
+export interface CachedPage {
+  body: Buffer;
+  etag: string;
+}
+
+const pages = new Map<string, CachedPage>();
+/** Builds under way, so clients asking for the same new page at once share one build. */
+const building = new Map<string, Promise<CachedPage>>();
 
 /** Only finished sweeps are kept: a running one changes with every chunk written. */
 export function pageKey(kind: string, state: SweepState, query: string): string | null {
@@ -50,14 +60,35 @@ export function pageKey(kind: string, state: SweepState, query: string): string 
   return `${kind}\u0000${state.id}\u0000${state.pointsDone}\u0000${state.costModelVersion}\u0000${state.currentCostVersion}\u0000${query}`;
 }
 
-/** The page's JSON from the cache, or from `build` (then kept, the oldest entry making room). */
-export async function cachedPage(key: string | null, build: () => Promise<unknown>): Promise<string> {
-  const hit = key === null ? undefined : pages.get(key);
-  if (hit !== undefined) return hit;
-  const json = JSON.stringify(await build());
-  if (key !== null) {
-    if (pages.size >= MAX_PAGES) pages.delete(pages.keys().next().value!);
-    pages.set(key, json);
+function pageOf(value: unknown): CachedPage {
+  const body = Buffer.from(JSON.stringify(value));
+  // A weak tag of the length and a SHA-1 of the bytes, in the form Express itself would send.
+  const etag = `W/"${body.length.toString(16)}-${createHash('sha1').update(body).digest('base64').slice(0, 27)}"`;
+  return { body, etag };
+}
+
+/** The page from the cache, or from `build` (then kept, the oldest entry making room). */
+export async function cachedPage(key: string | null, build: () => Promise<unknown>): Promise<CachedPage> {
+  if (key === null) return pageOf(await build());
+  const hit = pages.get(key);
+  if (hit) return hit;
+  let pending = building.get(key);
+  if (!pending) {
+    pending = build().then(pageOf);
+    building.set(key, pending);
+    pending.then(
+      (page) => {
+        building.delete(key);
+        if (pages.size >= MAX_PAGES) pages.delete(pages.keys().next().value!);
+        pages.set(key, page);
+      },
+      () => building.delete(key),
+    );
   }
-  return json;
+  return pending;
+}
+
+/** Sends a page as JSON with its entity tag (Express answers 304 when the browser already has it). */
+export function sendPage(res: Response, page: CachedPage): void {
+  res.set('ETag', page.etag).type('json').send(page.body);
 }

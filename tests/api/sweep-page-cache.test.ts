@@ -60,6 +60,8 @@ describe('cached trade-table pages', () => {
     const again = await owner.get(url);
     expect(again.headers['content-type']).toMatch(/^application\/json/);
     expect(again.body).toEqual(first.body);
+    expect(again.headers.etag).toBe(first.headers.etag);
+    expect((await owner.get(url).set('if-none-match', first.headers.etag as string)).status).toBe(304);
     expect((await outsider.get(url)).status).toBe(404);
     const points = `/api/sweeps/${sweepId}/results?limit=10`;
     expect((await owner.get(points)).body.total).toBe(6);
