@@ -3,6 +3,7 @@ const benches: Record<string, () => Promise<{ run: (argv: string[]) => Promise<v
   evaluate: () => import('./evaluate.ts'),
   sweep: () => import('./sweep.ts'),
   results: () => import('./results.ts'),
+  cost: () => import('./cost.ts'),
   load: () => import('./load.ts'),
   password: () => import('./password.ts'),
   health: () => import('./health.ts'),

@@ -5,7 +5,7 @@ import { StudyCostModel } from '../entities/cost-model.ts';
 import type { CostModel, CostModelView } from '../../shared/cost/cost-model.ts';
 import { touchStudy } from './study-service.ts';
 import { findStudyFor } from './study-access.ts';
-import { repriceStudySweeps } from './sweep-pricing.ts';
+import { INLINE_REPRICE_DESIGNS, repriceStudySweeps, scheduleReprice, storedDesigns } from './sweep-pricing.ts';
 
 function view(studyId: string, row: StudyCostModel | null): CostModelView {
   return {
@@ -21,10 +21,19 @@ export async function getCostModel(ctx: AppContext, user: AuthUser, studyId: str
   return view(studyId, await ctx.db.getRepository(StudyCostModel).findOneBy({ studyId }));
 }
 
-/** Replaces the model (version + 1) and re-prices every sweep of the study in the same transaction. */
-export async function putCostModel(ctx: AppContext, user: AuthUser, studyId: string, model: CostModel): Promise<CostModelView> {
+/**
+ * Replaces the model (version + 1). Up to `inlineLimit` stored designs are re-priced in the same transaction;
+ * beyond it the save commits at once and they are re-priced after it (the designs endpoint says so meanwhile).
+ */
+export async function putCostModel(
+  ctx: AppContext,
+  user: AuthUser,
+  studyId: string,
+  model: CostModel,
+  inlineLimit = INLINE_REPRICE_DESIGNS,
+): Promise<CostModelView> {
   await findStudyFor(ctx, user, studyId, 'edit');
-  return ctx.db.transaction(async (m) => {
+  const saved = await ctx.db.transaction(async (m) => {
     // The upsert takes the model row's lock, so concurrent saves get consecutive versions.
     await m.query(
       `INSERT INTO study_cost_models (study_id, model, version, updated_by, updated_at) VALUES ($1, $2::jsonb, 1, $3, now())
@@ -33,8 +42,11 @@ export async function putCostModel(ctx: AppContext, user: AuthUser, studyId: str
       [studyId, JSON.stringify(model), user.id],
     );
     const row = await m.getRepository(StudyCostModel).findOneByOrFail({ studyId });
-    const repricedSweeps = await repriceStudySweeps(m, studyId, { model: row.model, version: row.version });
+    const inline = (await storedDesigns(m, studyId)) <= inlineLimit;
+    const repricedSweeps = inline ? await repriceStudySweeps(m, studyId, { model: row.model, version: row.version }) : 0;
     await touchStudy(m, studyId);
-    return { ...view(studyId, row), repricedSweeps };
+    return { ...view(studyId, row), repricedSweeps, repricing: !inline };
   });
+  if (saved.repricing) void scheduleReprice(ctx.db, ctx.log, studyId, true);
+  return saved;
 }

@@ -11,7 +11,7 @@ import type { Sweep } from '../entities/sweep.ts';
 import { safeText } from '../../shared/export/safe-cell.ts';
 import { buildQuery } from './sweep-query.ts';
 import { windowedDesignsCte } from './sweep-scan-window.ts';
-import { sweepCostBasis } from './sweep-pricing.ts';
+import { scheduleReprice, sweepCostBasis } from './sweep-pricing.ts';
 import type { SweepCostBasis } from '../../shared/cost/cost-model.ts';
 
 export interface Page<T> {
@@ -48,7 +48,10 @@ export async function listDesigns(ctx: AppContext, sweep: Sweep, q: ResultsQuery
     `${prefix}SELECT ${select(DESIGN_COLUMNS)}, design FROM ${source} WHERE ${where} ORDER BY ${order} LIMIT ${q.limit} OFFSET ${q.offset}`,
     params,
   )) as DesignRow[];
-  return { total, rows, cost: await sweepCostBasis(ctx.db.manager, sweep.id) };
+  const cost = await sweepCostBasis(ctx.db.manager, sweep.id);
+  // Figures behind the study's model (a re-pricing cut short by a restart) are brought up to date in the background.
+  if (!cost.current && cost.currentVersion !== null) void scheduleReprice(ctx.db, ctx.log, sweep.studyId);
+  return { total, rows, cost };
 }
 
 const CSV_BATCH = 2000;

@@ -59,6 +59,8 @@ export interface CostModelView {
   updatedAt: string | null;
   /** Sweeps re-priced by this save (PUT only). */
   repricedSweeps?: number;
+  /** PUT only: true when the study's stored designs are many and are being re-priced after the save. */
+  repricing?: boolean;
 }
 
 /** Which cost model a sweep's figures were priced with (beside GET /api/sweeps/:id/designs rows). */
@@ -68,6 +70,6 @@ export interface SweepCostBasis {
   /** The study's model version now; null: the study has no model. */
   currentVersion: number | null;
   currency: string | null;
-  /** True when the figures are on the study's current model. */
+  /** True when the figures are on the study's current model; false while they are being re-priced. */
   current: boolean;
 }

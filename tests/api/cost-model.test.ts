@@ -9,8 +9,9 @@ import { inject } from 'vitest';
 import { createApp } from '../../server/app.ts';
 import type { AppContext } from '../../server/context.ts';
 import { Study } from '../../server/entities/study.ts';
+import { putCostModel } from '../../server/services/cost-model-service.ts';
 import { startSweepRunner, type SweepRunner } from '../../server/sweeps/runner.ts';
-import { authed, seedTeam, type AuthedClient } from '../helpers/auth.ts';
+import { authed, seedTeam, type AuthedClient, type SeededTeam } from '../helpers/auth.ts';
 import { openTestContext, truncateAll } from '../helpers/db.ts';
 
 let ctx: AppContext;
@@ -20,6 +21,7 @@ let engineer: AuthedClient;
 let reviewer: AuthedClient;
 let outsider: AuthedClient;
 let studyId: string;
+let team: SeededTeam;
 
 /** Two 1-row designs (4 and 10 elements, one channel each, 5.35 mm pitch, uniform, 10 dBm a channel), two steers. */
 const GRID = { frequencyGHz: 28, nx: [4, 10], dxMm: 5.35, element: { kind: 'cosine', q: 1.5 }, channelPowerDbm: 10, steerAzDeg: [0, 30] };
@@ -35,7 +37,7 @@ beforeAll(async () => {
   runner = await startSweepRunner({ db: ctx.db, url: inject('databaseUrl'), log: ctx.log, threads: 1, embedded: true, recoverEverySeconds: 1 });
   ctx.sweeps = runner;
   app = createApp(ctx);
-  const team = await seedTeam(ctx.db);
+  team = await seedTeam(ctx.db);
   const other = await seedTeam(ctx.db);
   engineer = await authed(app, team.engineer);
   reviewer = await authed(app, team.reviewer);
@@ -148,11 +150,31 @@ describe('cost columns of a sweep', () => {
   });
 });
 
+describe('re-pricing after the save (many stored designs)', () => {
+  it('commits the save at once, says the figures are behind, and brings them to the new model', async () => {
+    const user = { id: team.engineer.id, email: team.engineer.email, name: team.engineer.name, role: team.engineer.role, teamId: team.team.id };
+    const sweepId = (await engineer.get(`/api/studies/${studyId}/sweeps`)).body.map((s: { id: string }) => s.id)[0] as string;
+    // An inline limit of 0 designs sends every save down the after-the-save path.
+    const saved = await putCostModel(ctx, user, studyId, { ...MODEL_A, modulePrice: 50 }, 0);
+    expect(saved).toMatchObject({ version: 3, repricedSweeps: 0, repricing: true });
+    const deadline = Date.now() + 30_000;
+    let page = await engineer.get(`/api/sweeps/${sweepId}/designs?limit=10`);
+    while (!page.body.cost.current && Date.now() < deadline) {
+      expect(page.body.cost).toMatchObject({ version: 2, currentVersion: 3, current: false });
+      await new Promise((r) => setTimeout(r, 100));
+      page = await engineer.get(`/api/sweeps/${sweepId}/designs?limit=10`);
+    }
+    expect(page.body.cost).toEqual({ version: 3, currentVersion: 3, currency: 'EUR', current: true });
+    // Hand-worked: model A with the module at 50 instead of 5: nx = 4 → 10 + 4 + 1.7199 + 50 = 65.7199.
+    expect(byNx(page.body.rows, 4).costUsd).toBeCloseTo(65.7199, 9);
+  });
+});
+
 describe('duplicating a study', () => {
   it('copies its cost model as version 1 of the copy', async () => {
     const res = await engineer.post(`/api/studies/${studyId}/duplicate`);
     expect(res.status).toBe(201);
     const copy = await engineer.get(`/api/studies/${res.body.id}/cost-model`);
-    expect(copy.body).toMatchObject({ model: { ...MODEL_A, chipPrice: 100, txDutyCycle: 1 }, version: 1 });
+    expect(copy.body).toMatchObject({ model: { ...MODEL_A, modulePrice: 50 }, version: 1 });
   });
 });
