@@ -44,6 +44,10 @@ export interface TradeDesign {
   /** Total conducted power of the design (dBm), and its chips under the study's cost model; absent = unknown. */
   conductedPowerDbm?: number | null;
   beamformerChips?: number | null;
+  /** Gain worst cases over the design's steers (dBi, dB); absent or null for sweeps stored before they existed. */
+  gainMaxDbi?: number | null;
+  gainAtSteerMinDbi?: number | null;
+  pointingLossMaxDb?: number | null;
 }
 
 /** Short words for a taper, as the table and the chart legends print it. */
@@ -149,5 +153,8 @@ export function fromDesignRow(row: DesignRowJson, span: SteerSpan | null): Trade
     failedPoints: num(row.pointsFailed) ?? 0,
     conductedPowerDbm: num(row.conductedPowerDbm),
     beamformerChips: num(row.beamformerChips),
+    gainMaxDbi: num(row.gainMaxDbi),
+    gainAtSteerMinDbi: num(row.gainAtSteerMinDbi),
+    pointingLossMaxDb: num(row.pointingLossMaxDb),
   };
 }

@@ -63,7 +63,12 @@ export const TRADE_FIELDS: readonly TradeField[] = [
   { key: 'hpbwElMinDeg', label: 'Narrowest HPBW el', unit: '°', group: 'Metrics', type: 'number', digits: 1, limit: 'hpbwElDeg', get: (r) => f(r).hpbwElMinDeg },
   { key: 'worstSllDb', label: 'Worst side-lobe level', unit: 'dB', group: 'Metrics', type: 'number', digits: 1, limit: 'maxSllDb', better: 'min', get: (r) => f(r).worstSllDb },
   { key: 'scanRangeDeg', label: 'Scan range', unit: '°', group: 'Metrics', type: 'number', digits: 1, better: 'max', get: (r) => r.scanRangeDeg },
-  { key: 'directivityMaxDbi', label: 'Peak directivity', unit: 'dBi', group: 'Metrics', type: 'number', digits: 1, better: 'max', get: (r) => r.directivityMaxDbi },
+  // Gain counts the embedded element and the taper as a link budget does; directivity is the pattern's own figure.
+  // (EIRP at edge of scan above is the EIRP toward the steer there, since engine 1.1.0.)
+  { key: 'gainMaxDbi', label: 'Peak gain', unit: 'dBi', group: 'Metrics', type: 'number', digits: 1, better: 'max', get: (r) => r.gainMaxDbi ?? null },
+  { key: 'gainAtSteerMinDbi', label: 'Lowest gain toward the steer', unit: 'dBi', group: 'Metrics', type: 'number', digits: 1, better: 'max', get: (r) => r.gainAtSteerMinDbi ?? null },
+  { key: 'pointingLossMaxDb', label: 'Worst pointing loss', unit: 'dB', group: 'Metrics', type: 'number', digits: 2, better: 'min', get: (r) => r.pointingLossMaxDb ?? null },
+  { key: 'directivityMaxDbi', label: "Peak directivity (the pattern's)", unit: 'dBi', group: 'Metrics', type: 'number', digits: 1, better: 'max', get: (r) => r.directivityMaxDbi },
   { key: 'gratingLobeOnsetAzDeg', label: 'Grating-lobe onset az', unit: '°', group: 'Metrics', type: 'number', digits: 1, better: 'max', get: (r) => r.gratingLobeOnsetAzDeg },
   { key: 'gratingLobeOnsetElDeg', label: 'Grating-lobe onset el', unit: '°', group: 'Metrics', type: 'number', digits: 1, better: 'max', get: (r) => r.gratingLobeOnsetElDeg },
   { key: 'gratingLobeInScan', label: 'Grating lobe in scan', unit: '', group: 'Metrics', type: 'boolean', limit: 'noGratingLobeInScan', serverKey: 'gratingLobeVisibleAny', get: (r) => f(r).gratingLobeInScan },
