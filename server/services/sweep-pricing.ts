@@ -19,7 +19,7 @@ export interface CurrentCostModel {
 }
 
 /** Stored designs a save re-prices inside its own transaction; above this the work moves after the save. */
-export const INLINE_REPRICE_DESIGNS = 20_000;
+export const INLINE_REPRICE_DESIGNS = 5_000;
 
 /** The study's model, read afresh (call it after taking the sweep row's lock); null when none is saved. */
 export async function currentCostModel(m: EntityManager, studyId: string): Promise<CurrentCostModel | null> {
