@@ -9,7 +9,7 @@ import { designLabel } from '../../shared/trade/design-label.ts';
 import { drawChart } from './pdf-chart.ts';
 import { pdfText, registerPacketFonts, type PacketFonts } from './pdf-fonts.ts';
 import { drawTable } from './pdf-table.ts';
-import { COST_COLUMNS, costComparison } from './cost-comparison.ts';
+import { COST_COLUMNS, costComparison } from '../../shared/trade/cost-comparison.ts';
 
 const MARGIN = { top: 64, bottom: 56, left: 50, right: 50 };
 // Our palette (src/styles/theme.ts): ink, teal, rust.

@@ -1,9 +1,24 @@
 /**
- * The packet's cost-and-power comparison: the ranked sweep designs (the alternatives) with their module cost,
- * DC power and heat density beside EIRP at the edge of scan, the signed design marked. Pure: rows of text cells.
+ * The review packet's cost-and-power comparison: the ranked sweep designs (the alternatives) with their module
+ * cost, DC power and heat density beside EIRP at the edge of scan, the signed design marked. Pure text cells, so
+ * the PDF and the printable page print the same table.
  */
-import { parseSweepDesignId } from '../../shared/schemas/review.ts';
-import type { PacketSweepRanking } from './sweep-ranking.ts';
+import { parseSweepDesignId } from '../schemas/review.ts';
+
+type Figure = number | null | undefined;
+
+/** What the comparison reads of a packet's sweep ranking (the server's PacketSweepRanking satisfies it). */
+export interface CostRankingLike {
+  sweepId: string;
+  rows: readonly {
+    rank: number;
+    designIndex: number;
+    label: string;
+    parameters: string;
+    verdict: string;
+    figures: { edgeEirpDbm?: Figure; costUsd?: Figure; dcPowerW?: Figure; heatWPerCm2?: Figure };
+  }[];
+}
 
 export const COST_COLUMNS = [
   { title: '#', width: 0.5 },
@@ -15,7 +30,7 @@ export const COST_COLUMNS = [
   { title: 'Heat (W/cm²)', width: 1.2, align: 'right' as const },
 ];
 
-const fixed = (v: number | null | undefined, digits: number) => (typeof v === 'number' && Number.isFinite(v) ? v.toFixed(digits) : '—');
+const fixed = (v: Figure, digits: number) => (typeof v === 'number' && Number.isFinite(v) ? v.toFixed(digits) : '—');
 
 export interface CostComparison {
   /** False when no listed design has a cost (the study has no cost model): the section says so instead. */
@@ -24,7 +39,7 @@ export interface CostComparison {
 }
 
 /** `source` is the signed decision's design id ("<sweep id>:<design index>") when it came from a sweep. */
-export function costComparison(ranking: PacketSweepRanking | null, source: string | null): CostComparison {
+export function costComparison(ranking: CostRankingLike | null, source: string | null): CostComparison {
   if (!ranking) return { priced: false, rows: [] };
   const chosen = source ? parseSweepDesignId(source) : null;
   const rows = ranking.rows.map((r) => {

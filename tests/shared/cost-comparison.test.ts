@@ -1,6 +1,6 @@
 /** The packet's cost comparison rows: figures printed with their units' digits, the signed design marked. */
 import { describe, expect, it } from 'vitest';
-import { costComparison } from '../../server/packet/cost-comparison.ts';
+import { costComparison } from '../../shared/trade/cost-comparison.ts';
 import type { PacketSweepRanking } from '../../server/packet/sweep-ranking.ts';
 import type { DesignFigures } from '../../shared/targets/figures.ts';
 
