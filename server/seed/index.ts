@@ -1,6 +1,7 @@
 /** Demo data for `npm start`: idempotent, so every start may call it. Features add their seeds here. */
 import type { AppContext } from '../context.ts';
 import { seedAccounts } from './accounts.ts';
+import { seedDemoElementPattern } from './demo-element-pattern.ts';
 import { seedDemoRangeData } from './demo-range-data.ts';
 import { seedDemoStudy } from './demo-study.ts';
 
@@ -9,4 +10,5 @@ export async function seedDemo(ctx: AppContext): Promise<void> {
   const demo = await seedDemoStudy(ctx);
   // Only with a study just made, so a restart never adds the cuts twice.
   if (demo) await seedDemoRangeData(ctx, demo.studyId);
+  if (demo) await seedDemoElementPattern(ctx, demo.studyId);
 }
