@@ -16,13 +16,21 @@ export const MAX_MODULES = 8;
 export const MAX_BEAMS_PER_MODULE = 128;
 export const MAX_BEAMS = 256;
 /** Most beams a fill rule may choose for one module. */
-export const MAX_FILL_BEAMS = 64;
+export const MAX_FILL_BEAMS = MAX_BEAMS_PER_MODULE;
 export const MAX_PERCENTILES = 32;
 /** Sampling steps (degrees) a request may choose; without one, autoStepDeg picks it from the beamwidths. */
 export const MIN_STEP_DEG = 0.25;
 export const MAX_STEP_DEG = 5;
-/** Directions × beams one request may ask for; keeps one computation to a few seconds on one thread. */
-export const MAX_WORK = 40_000_000;
+/**
+ * Work one request may ask for, in directions × beams × (elements + 8): a beam's gain costs up to one term per
+ * element (quantised phases rarely separate into rows and columns). About 7 ns a unit on this project's machine,
+ * so the limit keeps one computation to a few seconds on one thread; the reference handset is 6 million units.
+ */
+export const MAX_WORK = 1_000_000_000;
+/** The fill search costs about this many full samplings of its region with MAX_FILL_BEAMS beams (measured: under 4). */
+const FILL_TRIALS = 6;
+
+const beamCost = (d: { nx: number; ny: number }) => d.nx * d.ny + 8;
 
 const steer = (what: string) =>
   z
@@ -165,12 +173,23 @@ export const CoverageRequestSchema = z
   )
   .strict()
   .superRefine((r, ctx) => {
-    // A fill rule counts as the most beams it may choose.
-    const beams = r.modules.reduce((s, m) => s + (Array.isArray(m.beams) ? m.beams.length : MAX_FILL_BEAMS), 0);
+    // Listed beams only: a fill rule's count is known once it has run (at most MAX_FILL_BEAMS; the work estimate covers it).
+    const beams = r.modules.reduce((s, m) => s + (Array.isArray(m.beams) ? m.beams.length : 0), 0);
     if (beams > MAX_BEAMS) ctx.addIssue({ code: 'custom', path: ['modules'], message: `must hold at most ${MAX_BEAMS} beams in all (got ${beams})` });
     const cells = gridCells(r.region, r.stepDeg ?? autoStepDeg(r.modules.map((m) => m.design)));
-    if (cells.az * cells.el * beams > MAX_WORK) {
-      ctx.addIssue({ code: 'custom', path: ['stepDeg'], message: `is too fine for ${beams} beams over this region (directions × beams must stay under ${MAX_WORK})` });
+    let work = 0;
+    r.modules.forEach((m) => {
+      const n = Array.isArray(m.beams) ? m.beams.length : MAX_FILL_BEAMS;
+      work += cells.az * cells.el * n * beamCost(m.design);
+      if (!Array.isArray(m.beams)) {
+        const fill = gridCells(m.beams.fill.region, autoStepDeg([m.design]));
+        work += fill.az * fill.el * MAX_FILL_BEAMS * beamCost(m.design) * FILL_TRIALS;
+      }
+    });
+    if (work > MAX_WORK) {
+      const why = `is too much work (${(work / 1e9).toFixed(1)} × 10⁹ units of directions × beams × elements; at most ${MAX_WORK / 1e9} × 10⁹)`;
+      const advice = r.stepDeg === undefined ? ': use fewer beams or smaller modules, or set a coarser stepDeg' : ': choose a coarser step, fewer beams or smaller modules';
+      ctx.addIssue({ code: 'custom', path: [r.stepDeg === undefined ? 'modules' : 'stepDeg'], message: why + advice });
     }
   });
 export type CoverageRequest = z.input<typeof CoverageRequestSchema>;

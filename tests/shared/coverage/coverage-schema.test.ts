@@ -35,6 +35,9 @@ describe('CoverageRequestSchema', () => {
   it('refuses more work than one computation should take', () => {
     const beams = Array.from({ length: 128 }, (_, i) => ({ azDeg: -63.5 + i, elDeg: 0 }));
     const heavy = { ...good, modules: [{ design, orientation: 'front', beams }, { design, orientation: 'back', beams }], stepDeg: 0.25 };
-    expect(first(heavy)).toMatch(/^stepDeg: is too fine for 256 beams/);
+    expect(first(heavy)).toMatch(/^stepDeg: is too much work \(4\.2 × 10⁹ units/);
+    const { stepDeg: _auto, ...unstepped } = heavy;
+    const big = { ...unstepped, modules: [{ design: { ...design, nx: 64, ny: 64 }, orientation: 'front', beams }] };
+    expect(first(big)).toMatch(/^modules: is too much work .*set a coarser stepDeg$/);
   });
 });
