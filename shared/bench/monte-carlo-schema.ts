@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { BeamSchema } from './beam.ts';
 
-/** Largest run; the worker pool takes runs above MONTE_CARLO_INLINE_TRIALS. */
+/** Largest run (runs always go to the worker pool; MONTE_CARLO_SPLIT_TRIALS decides when they are split). */
 export const MAX_MONTE_CARLO_TRIALS = 100_000;
 
 export const MonteCarloOptionsSchema = z
