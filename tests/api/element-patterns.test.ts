@@ -75,4 +75,20 @@ describe('element patterns', () => {
     expect(bad.status).toBe(400);
     expect(bad.body.error.message).toMatch(/^grid\.element\[1\]\.patternId: /);
   });
+
+  it('POST /api/evaluate resolves a table element by id for any study the caller may read; a stranger id is a 400 naming it', async () => {
+    const id = (await upload(CSV)).body.id as string;
+    const design = { frequencyGHz: 28, nx: 4, dxMm: 5.35, steerAzDeg: 30, channelPowerDbm: 10, element: { kind: 'table', patternId: id } };
+    const res = await api.reviewer.post('/api/evaluate').send([design, { ...design, element: { kind: 'isotropic' } }]);
+    expect(res.status).toBe(200);
+    const direct = evaluateDesign(DesignSchema.parse({ ...design, element: { kind: 'table', patternId: id, pattern: demoPatchPattern(5) } }));
+    expect(res.body[0].gainAtSteerDbi).toBeCloseTo(direct.gainAtSteerDbi!, 9);
+    expect(res.body[0].eirpAtSteerDbm).toBeCloseTo(direct.eirpAtSteerDbm!, 9);
+    const outsider = await api.outsider.post('/api/evaluate').send(design);
+    expect(outsider.status).toBe(400);
+    expect(outsider.body.error.message).toBe('element.patternId: must be the id of an element pattern uploaded to this study');
+    const listed = await api.engineer.post('/api/evaluate').send([{ ...design, element: { kind: 'isotropic' } }, { ...design, element: { kind: 'table', patternId: 'not-an-id' } }]);
+    expect(listed.status).toBe(400);
+    expect(listed.body.error.message).toMatch(/^\[1\]\.element\.patternId: /);
+  });
 });
