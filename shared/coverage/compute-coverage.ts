@@ -2,6 +2,7 @@ import { DEG_PER_RAD } from '../engine/constants.ts';
 import { exposureEstimate } from '../safety/index.ts';
 import { autoStepDeg } from './auto-step-deg.ts';
 import { COVERAGE_CAUTIONS } from './coverage-cautions.ts';
+import { coverageMap } from './coverage-map.ts';
 import type { CoverageInput } from '../schemas/coverage.ts';
 import type { CoverageResult, ServedDirection } from './coverage-result.ts';
 import { deviceEirp, type DeviceEirp, type Serving } from './device-eirp.ts';
@@ -16,7 +17,6 @@ import { cdfQuantileDbm, weightedCdf } from './weighted-cdf.ts';
 const CDF_STEPS = 200;
 
 const dbm = (mw: number): number | null => (mw > 0 ? 10 * Math.log10(mw) : null);
-const round2 = (x: number | null): number | null => (x === null ? null : Math.round(x * 100) / 100);
 
 function served(eirp: DeviceEirp, x: Extremum): ServedDirection {
   const s: Serving = { module: -1, beam: -1 };
@@ -35,12 +35,13 @@ function servedFractions(samples: RegionSamples, modules: number, total: number)
  * Coverage of a device: EIRP toward every direction of the region is the best beam of any module
  * (conducted power + beam gain in the module's frame). Sampled on a regular az–el grid weighted by exact
  * cell solid angle; peak and dip refined by a local search. Pure; fast enough for a browser worker.
+ * `onProgress(fraction)` (0..1) follows the sampling, the bulk of the work, for a progress bar.
  */
-export function computeCoverage(input: CoverageInput): CoverageResult {
+export function computeCoverage(input: CoverageInput, onProgress?: (fraction: number) => void): CoverageResult {
   const { modules, fills } = resolveCodebooks(input.modules);
   const eirp = deviceEirp(modules);
   const grid = regionGrid(input.region, input.stepDeg ?? autoStepDeg(modules.map((m) => m.design)));
-  const samples = sampleRegion(eirp, grid);
+  const samples = sampleRegion(eirp, grid, onProgress && ((done, total) => onProgress((0.9 * done) / total)));
   const cdf = weightedCdf(samples.eirpMw, samples.weightSr);
   const peak = eirpPeak(eirp, modules.map((m) => m.beams), grid, samples);
   const dip = eirpDip(eirp, grid, samples);
@@ -55,9 +56,8 @@ export function computeCoverage(input: CoverageInput): CoverageResult {
     const level = quantile(i / CDF_STEPS);
     if (level !== null) curve.push({ fraction: i / CDF_STEPS, eirpDbm: level });
   }
-  const lit = (k: number) => samples.module[k]! >= 0;
   const shares = servedFractions(samples, modules.length, grid.solidAngleSr);
-  return {
+  const result: CoverageResult = {
     region: input.region,
     solidAngleSr: grid.solidAngleSr,
     peakEirpDbm,
@@ -66,15 +66,7 @@ export function computeCoverage(input: CoverageInput): CoverageResult {
     minAt: served(eirp, dip),
     eirpPercentilesDbm,
     cdf: curve,
-    map: {
-      azStepDeg: grid.azStepDeg,
-      elStepDeg: grid.elStepDeg,
-      azDeg: Array.from(grid.azDeg),
-      elDeg: Array.from(grid.elDeg),
-      eirpDbm: Array.from(samples.eirpMw, (mw) => round2(dbm(mw))),
-      module: Array.from(samples.module, (m, k) => (lit(k) ? m : null)),
-      beam: Array.from(samples.beam, (b, k) => (lit(k) ? b : null)),
-    },
+    map: coverageMap(grid, samples),
     modules: modules.map((m, i) => ({
       conductedPowerDbm: eirp.modules[i]!.conductedPowerDbm,
       beams: m.beams.length,
@@ -85,4 +77,6 @@ export function computeCoverage(input: CoverageInput): CoverageResult {
     exposure: peakEirpDbm === null ? null : exposureEstimate({ eirpDbm: peakEirpDbm }),
     cautions: [...COVERAGE_CAUTIONS],
   };
+  onProgress?.(1);
+  return result;
 }

@@ -10,7 +10,8 @@ export interface RegionSamples {
   beam: Int16Array;
 }
 
-export function sampleRegion(eirp: DeviceEirp, grid: RegionGrid): RegionSamples {
+/** `onRow(done, total)` after each elevation row, for a progress bar. */
+export function sampleRegion(eirp: DeviceEirp, grid: RegionGrid, onRow?: (done: number, total: number) => void): RegionSamples {
   const nAz = grid.azDeg.length;
   const nEl = grid.elDeg.length;
   const eirpMw = new Float64Array(nAz * nEl);
@@ -28,6 +29,7 @@ export function sampleRegion(eirp: DeviceEirp, grid: RegionGrid): RegionSamples 
       module[k] = serving.module;
       beam[k] = serving.beam;
     }
+    onRow?.(j + 1, nEl);
   }
   return { eirpMw, weightSr, module, beam };
 }

@@ -44,6 +44,15 @@ describe('computeCoverage: closed forms', () => {
     expect(Math.abs(r.minAt.azDeg)).toBeLessThan(0.01);
   });
 
+  it('reports progress as it samples, rising to 1', () => {
+    const seen: number[] = [];
+    const input = CoverageRequestSchema.parse({ modules: [{ design: single({ kind: 'isotropic' }), orientation: 'front', beams: [{ azDeg: 0, elDeg: 0 }] }], region: { kind: 'sphere' }, stepDeg: 5 });
+    computeCoverage(input, (f) => seen.push(f));
+    expect(seen.length).toBe(36 + 1); // one per 5° elevation row, then done
+    expect(seen.every((f, i) => i === 0 || f >= seen[i - 1]!)).toBe(true);
+    expect(seen[seen.length - 1]).toBe(1);
+  });
+
   it('carries the model and RF-exposure cautions and an exposure estimate at the peak with every result', () => {
     const r = run({ modules: [{ design: single({ kind: 'isotropic' }, 30), orientation: 'front', beams: [{ azDeg: 0, elDeg: 0 }] }], region: { kind: 'sphere' }, stepDeg: 5 });
     expect(r.cautions).toContain(RF_EXPOSURE_CAUTION);
