@@ -24,5 +24,7 @@ export async function buildClientIfStale(root: string, outDir: string, log: (m: 
   if (!clientIsStale(root, outDir)) return;
   log('building the client (sources changed since the last build)…');
   const { build } = await import('vite');
-  await build({ root, logLevel: 'warn', build: { outDir, emptyOutDir: true } });
+  // Always a production bundle, even when a test runner (NODE_ENV=test) asks for it: Vite would otherwise bake
+  // NODE_ENV into the client, and libraries then ship their test-mode code (ant-design-vue's fixed select ids).
+  await build({ root, mode: 'production', logLevel: 'warn', define: { 'process.env.NODE_ENV': JSON.stringify('production') }, build: { outDir, emptyOutDir: true } });
 }
