@@ -13,6 +13,7 @@ import { idealBeam, monteCarloTrials } from '../shared/bench/monte-carlo-trials.
 import { evaluateDesign } from '../shared/engine/index.ts';
 import { channelCount } from '../shared/schemas/design.ts';
 import type { RequestTask, RequestTaskResult } from '../shared/compute/request-task.ts';
+import { scanDesign } from '../server/packet/design-scan.ts';
 
 function run(task: RequestTask): unknown {
   switch (task.kind) {
@@ -33,6 +34,8 @@ function run(task: RequestTask): unknown {
       monteCarloTrials(task.design, task.options, ideal, 0, 0); // checks the options (e.g. failedElements)
       return ideal;
     }
+    case 'scan-design':
+      return scanDesign(task.design, task.sheet);
     case 'monte-carlo': {
       const chunk = MonteCarloChunkSchema.parse(task.chunk);
       return monteCarloTrials(chunk.design, chunk.options, chunk.ideal, chunk.start, chunk.count);

@@ -10,7 +10,8 @@ import { Decision, type FrozenMetrics } from '../entities/decision.ts';
 import { User } from '../entities/user.ts';
 import { fieldError } from '../auth/errors.ts';
 import { Conflict, Forbidden, NotFound } from '../errors.ts';
-import { scanDesign } from '../packet/design-scan.ts';
+import type { DesignScan } from '../packet/design-scan.ts';
+import { runRequestTask } from '../compute/request-pool.ts';
 import { findSweepDesign } from '../packet/sweep-design.ts';
 import { ENGINE_VERSION } from '../../shared/engine/index.ts';
 import type { Design } from '../../shared/schemas/design.ts';
@@ -98,7 +99,8 @@ async function resolveDesign(
     if (!found) throw NotFound('sweep design');
     return { label: label ?? found.label, design: found.params, metrics: found.metrics, source: design, ...sheetPart(found.metrics) };
   }
-  const scan = scanDesign(design as Design, judged.sheet);
+  // A design evaluated at every judged steering angle: on the request pool, not the event loop.
+  const scan = await runRequestTask<DesignScan>({ kind: 'scan-design', design: design as Design, sheet: judged.sheet });
   const metrics: FrozenMetrics = {
     at: scan.at as unknown as Record<string, unknown>,
     axis: scan.axis,
