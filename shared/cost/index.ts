@@ -8,3 +8,4 @@ export { heatWPerCm2 } from './heat-w-per-cm2.ts';
 export { costOfDesign, type CostDesign, type CostMetrics, type CostFigures, type CostBreakdown } from './cost-of-design.ts';
 export { deviceCost, type DeviceCost } from './device-cost.ts';
 export { DEMO_COST_MODEL, COST_FIELD_NOTES, COST_FIELDS, type CostFieldNote, type CostBasis } from './demo-cost-model.ts';
+export { costOfModule } from './cost-of-module.ts';

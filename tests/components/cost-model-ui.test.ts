@@ -8,8 +8,10 @@ import { createPinia, setActivePinia } from 'pinia';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import CandidatePreview from '@/components/candidate/CandidatePreview.vue';
 import CostModelEditor from '@/components/cost/CostModelEditor.vue';
+import DeviceCostCard from '@/components/cost/DeviceCostCard.vue';
 import { computePreview } from '@/workers/preview-compute';
 import { DEMO_COST_MODEL } from '@shared/cost/index.ts';
+import { DesignSchema } from '@shared/schemas/design.ts';
 import { json, stubMatchMedia } from '../helpers/jsdom.ts';
 
 beforeEach(() => {
@@ -74,5 +76,25 @@ describe('CostModelEditor', () => {
     await flushPromises();
     expect(saved).toEqual(DEMO_COST_MODEL);
     expect(w.text()).toContain('Version 1');
+  });
+});
+
+describe('DeviceCostCard', () => {
+  it('adds the modules of a device under the study model', async () => {
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (url: string) => {
+        if (url === '/api/studies/s1/cost-model') return json(200, { studyId: 's1', model: DEMO_COST_MODEL, version: 1, updatedAt: '2026-12-01T00:00:00Z' });
+        throw new Error(`unexpected request ${url}`);
+      }),
+    );
+    const module = DesignSchema.parse({ frequencyGHz: 28, nx: 4, ny: 1, dxMm: 5.35, channelPowerDbm: 10 });
+    const w = mount(DeviceCostCard, { props: { studyId: 's1', designs: [module, module] }, global: { plugins: [Antd] } });
+    await flushPromises();
+    const text = w.find('[data-test="device-cost"]').text();
+    // Hand-worked: two modules of 26.07498 (see tests/shared/cost-model.test.ts) = 52.15; 2 × 0.35 W = 0.70 W; 2 chips.
+    expect(text).toContain('52.15 USD');
+    expect(text).toContain('0.70 W');
+    expect(text).toMatch(/Beamformer chips\s*2/);
   });
 });

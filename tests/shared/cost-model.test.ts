@@ -9,12 +9,15 @@ import {
   beamformerChips,
   boardAreaMm2,
   costOfDesign,
+  costOfModule,
   dcPowerW,
   deviceCost,
   heatWPerCm2,
   paDcPowerW,
   type CostModel,
 } from '../../shared/cost/index.ts';
+import { evaluateDesign } from '../../shared/engine/index.ts';
+import { DesignSchema } from '../../shared/schemas/design.ts';
 
 const model = (m: Partial<CostModel> = {}): CostModel => ({ ...DEMO_COST_MODEL, ...m });
 
@@ -158,5 +161,23 @@ describe('CostModelSchema', () => {
     const paths = r.error!.issues.map((i) => i.path.join('.'));
     expect(paths).toEqual(expect.arrayContaining(['paEfficiency', 'currency']));
     expect(CostModelSchema.safeParse({ ...DEMO_COST_MODEL, channelsPerChip: 2.5 }).success).toBe(false);
+  });
+});
+
+describe('costOfModule(design, model)', () => {
+  it('prices a design from its parameters as the sweep prices it from the engine metrics', () => {
+    // Hand-worked (as above): 1×4 uniform at 10 dBm with the demo model costs 26.07498 and draws 0.35 W.
+    const plain = DesignSchema.parse({ frequencyGHz: 28, nx: 4, ny: 1, dxMm: 5.35, channelPowerDbm: 10 });
+    expect(costOfModule(plain, model()).costUsd).toBeCloseTo(26.07498, 9);
+    expect(costOfModule(plain, model()).dcPowerW).toBeCloseTo(0.35, 12);
+    // A tapered 8×2 column-grouped design: the same figures as from a full engine evaluation (to 1e-12).
+    const tapered = DesignSchema.parse({
+      frequencyGHz: 28, nx: 8, ny: 2, dxMm: 5, taperX: { kind: 'taylor', sllDb: 25, nbar: 4 }, grouping: 'column', channelPowerDbm: 12,
+    });
+    const viaEngine = costOfDesign(tapered, evaluateDesign(tapered), model());
+    const direct = costOfModule(tapered, model());
+    expect(direct.beamformerChips).toBe(viaEngine.beamformerChips);
+    expect(direct.costUsd).toBeCloseTo(viaEngine.costUsd, 12);
+    expect(direct.dcPowerW!).toBeCloseTo(viaEngine.dcPowerW!, 12);
   });
 });
