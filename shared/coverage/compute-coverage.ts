@@ -45,7 +45,9 @@ export function computeCoverage(input: CoverageInput, onProgress?: (fraction: nu
   const cdf = weightedCdf(samples.eirpMw, samples.weightSr);
   const peak = eirpPeak(eirp, modules.map((m) => m.beams), grid, samples);
   const dip = eirpDip(eirp, grid, samples);
-  const peakEirpDbm = dbm(peak.value);
+  // The whole codebook's value at the peak found (the search followed one beam at a time).
+  const peakAt = served(eirp, peak);
+  const peakEirpDbm = peakAt.eirpDbm;
   const minEirpDbm = cdf.darkFraction > 0 ? null : dbm(dip.value);
   const quantile = (fraction: number): number | null =>
     fraction <= 0 ? (cdf.darkFraction > 0 ? null : minEirpDbm) : fraction >= 1 ? peakEirpDbm : cdfQuantileDbm(cdf, fraction);
@@ -61,7 +63,7 @@ export function computeCoverage(input: CoverageInput, onProgress?: (fraction: nu
     region: input.region,
     solidAngleSr: grid.solidAngleSr,
     peakEirpDbm,
-    peakAt: served(eirp, peak),
+    peakAt,
     minEirpDbm,
     minAt: served(eirp, dip),
     eirpPercentilesDbm,
