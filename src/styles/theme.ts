@@ -17,8 +17,8 @@ export const theme: ThemeConfig = {
   token: {
     colorPrimary: palette.teal,
     colorInfo: palette.teal,
-    colorSuccess: palette.pass,
-    colorError: palette.fail,
+    colorSuccess: '#1f6e44',
+    colorError: '#b0452c',
     colorWarning: '#b7791f',
     colorBgLayout: palette.paper,
     colorBorderSecondary: palette.line,
@@ -26,6 +26,12 @@ export const theme: ThemeConfig = {
     // the library's 45 % black is about 3.3:1 on paper.
     colorTextDescription: '#5b6b6d',
     colorTextTertiary: '#5b6b6d',
+    colorTextQuaternary: '#646f70',
+    colorTextPlaceholder: '#646f70',
+    colorTextDisabled: '#646f70',
+    // Text colours on tags, links and danger buttons a shade deeper than the palette, for AA contrast on white,
+    // paper and the light tag backgrounds (the palette's rust is 4.1:1 on paper; this is 5.1:1).
+    colorLink: '#18706a',
     borderRadius: 6,
     fontFamily: "'Work Sans', system-ui, sans-serif",
     fontSize: 14,
