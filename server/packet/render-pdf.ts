@@ -184,6 +184,15 @@ function charts(doc: PDFKit.PDFDocument, f: PacketFonts, data: PacketData): void
     yLabel: 'Scan loss (dB)',
     series: [{ name: 'Scan loss', color: CHART_COLORS[1]!, points: c.points.map((p) => ({ x: x(p), y: p.scanLossDb })) }],
   });
+  // What a link budget reads: embedded-element gain plus array gain toward each steer.
+  if (c.points.some((p) => p.gainAtSteerDbi !== null)) {
+    drawChart(doc, f, {
+      title: 'Gain toward the steer vs scan angle',
+      xLabel: `Scan angle in ${axis} (°)`,
+      yLabel: 'Gain (dBi)',
+      series: [{ name: 'Gain toward the steer', color: CHART_COLORS[0]!, points: c.points.map((p) => ({ x: x(p), y: p.gainAtSteerDbi })) }],
+    });
+  }
 }
 
 function history(doc: PDFKit.PDFDocument, f: PacketFonts, data: PacketData): void {

@@ -8,6 +8,7 @@ import { Calibration } from '../entities/calibration.ts';
 import { Candidate } from '../entities/candidate.ts';
 import { ApiError, invalidInput } from '../errors.ts';
 import { candidateFor } from './candidate-service.ts';
+import { resolveDesign } from './element-pattern-service.ts';
 import { runMonteCarlo } from '../bench/run-monte-carlo.ts';
 import { runRequestTask } from '../compute/request-pool.ts';
 import { checkWorkBudget } from '../middleware/heavy-request.ts';
@@ -39,6 +40,11 @@ export function designOf(candidate: Candidate): Design {
 }
 
 /** Runs shared/bench code, turning its "field: rule" failures into 400s. */
+/** The candidate's design with an uploaded element pattern's values filled in, as the engine needs them. */
+export function benchDesign(ctx: AppContext, candidate: Candidate): Promise<Design> {
+  return resolveDesign(ctx, candidate.studyId, designOf(candidate));
+}
+
 export function benchCall<T>(f: () => T): T {
   try {
     return f();
@@ -89,7 +95,7 @@ function codesOnPool(ctx: AppContext, design: Design, beams: Beam[], calibration
 export async function codesFor(ctx: AppContext, user: AuthUser, id: string, req: CodesRequest, signal?: AbortSignal): Promise<CodesTable> {
   const candidate = await candidateFor(ctx, user, id, 'read');
   const calibration = await offsetsFor(ctx, id, req.calibration);
-  const design = designOf(candidate);
+  const design = await benchDesign(ctx, candidate);
   const table = await codesOnPool(ctx, design, benchCall(() => beamsOf(req.beams)), calibration, req.pointingThresholdDeg ?? null, signal);
   return { ...table, header: { ...table.header, candidate: candidate.name } };
 }
@@ -98,7 +104,7 @@ export async function codesFor(ctx: AppContext, user: AuthUser, id: string, req:
 export async function codesCsvFor(ctx: AppContext, user: AuthUser, id: string, q: CodesCsvQuery, signal?: AbortSignal): Promise<{ csv: string; filename: string }> {
   const candidate = await candidateFor(ctx, user, id, 'read');
   const calibration = await offsetsFor(ctx, id, q.calibration);
-  const pooled = await codesOnPool(ctx, designOf(candidate), benchCall(() => beamsOf(q.beams)), calibration, q.threshold ?? null, signal);
+  const pooled = await codesOnPool(ctx, await benchDesign(ctx, candidate), benchCall(() => beamsOf(q.beams)), calibration, q.threshold ?? null, signal);
   const table = { ...pooled, header: { ...pooled.header, candidate: candidate.name } };
   const safe = candidate.name.replace(/[^A-Za-z0-9._-]+/g, '-').replace(/^-+|-+$/g, '') || 'candidate';
   return { csv: codesCsv(table), filename: `${safe}-bench-codes.csv` };
@@ -130,7 +136,7 @@ export function calibrationFromFile(bytes: Buffer): Offsets {
 /** Replaces the candidate's calibration (checked against its channel count). */
 export async function putCalibration(ctx: AppContext, user: AuthUser, id: string, offsets: Offsets, sourceFilename: string | null): Promise<CalibrationView> {
   const candidate = await candidateFor(ctx, user, id, 'edit');
-  const design = designOf(candidate);
+  const design = await benchDesign(ctx, candidate);
   benchCall(() => offsetArrays(offsets, channelCount(design.grouping, design.nx, design.ny), 'offsets'));
   const repo = ctx.db.getRepository(Calibration);
   const saved = await repo.save(repo.create({ candidateId: id, offsets, sourceFilename, updatedBy: user.id }));
@@ -141,7 +147,7 @@ export async function putCalibration(ctx: AppContext, user: AuthUser, id: string
 export async function manualCodes(ctx: AppContext, user: AuthUser, id: string, req: ManualCodesRequest, signal?: AbortSignal): Promise<ManualCodesResult> {
   const candidate = await candidateFor(ctx, user, id, 'read');
   const calibration = await offsetsFor(ctx, id, req.calibration);
-  const design = designOf(candidate);
+  const design = await benchDesign(ctx, candidate);
   checkWorkBudget(ctx, patternWork(design), 'codes');
   return runRequestTask<ManualCodesResult>({ kind: 'manual-codes', design, codes: req.codes, calibration }, pooled(ctx, signal));
 }
@@ -152,7 +158,7 @@ export async function squintFor(ctx: AppContext, user: AuthUser, id: string, req
   if (typeof req.band === 'string' && !preset) throw invalidInput([{ field: 'band', message: `must be one of ${BANDS.map((b) => b.id).join(', ')} or {lowGHz, highGHz}` }]);
   const band = preset ? { id: preset.id, lowGHz: preset.lowGHz, highGHz: preset.highGHz, source: preset.source } : { id: null, ...(req.band as { lowGHz: number; highGHz: number }), source: null };
   if (!(band.highGHz > band.lowGHz)) throw invalidInput([{ field: 'band.highGHz', message: 'must be above lowGHz' }]);
-  const design = designOf(candidate);
+  const design = await benchDesign(ctx, candidate);
   const outside = squintBandRule(band, design.frequencyGHz);
   if (outside) throw invalidInput([{ field: 'band', message: outside }]);
   const calibration = await offsetsFor(ctx, id, req.calibration);
@@ -166,7 +172,7 @@ export async function squintFor(ctx: AppContext, user: AuthUser, id: string, req
 /** Monte Carlo of channel errors on the worker pool (one pattern per trial plus the ideal beam). */
 export async function monteCarloFor(ctx: AppContext, user: AuthUser, id: string, options: MonteCarloOptions, signal?: AbortSignal): Promise<MonteCarloSummary> {
   const candidate = await candidateFor(ctx, user, id, 'read');
-  const design = designOf(candidate);
+  const design = await benchDesign(ctx, candidate);
   checkWorkBudget(ctx, patternWork(design, options.trials + 1), 'trials');
   return runMonteCarlo(design, options, { splitTrials: ctx.config.MONTE_CARLO_SPLIT_TRIALS, ...pooled(ctx, signal) });
 }

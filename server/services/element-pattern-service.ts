@@ -164,3 +164,13 @@ export async function resolveGridElements<G extends { element?: unknown }>(ctx: 
   const out = resolved.map((d) => d.element);
   return { ...grid, element: list ? out : out[0] };
 }
+
+/** One stored design of `studyId` with its table element filled in (400 naming the field when the pattern is gone). */
+export async function resolveDesign<D extends DesignLike>(ctx: AppContext, studyId: string, design: D): Promise<D> {
+  return (await resolveElementPatterns(ctx, { studyId }, [design], () => 'design.element.patternId'))[0]!;
+}
+
+/** Like resolveElementPatterns for a study's stored designs, but a design whose pattern is gone is left as it is. */
+export async function resolveStoredDesigns<D extends DesignLike>(ctx: AppContext, studyId: string, designs: readonly D[]): Promise<D[]> {
+  return Promise.all(designs.map((d) => resolveDesign(ctx, studyId, d).catch(() => d)));
+}

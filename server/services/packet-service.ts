@@ -20,6 +20,7 @@ import { RANK_OBJECTIVES } from '../../shared/trade/rank.ts';
 import type { TradeDesign, TradeParams } from '../../shared/trade/trade-design.ts';
 import { listDecisions, type DecisionView } from './decision-service.ts';
 import { getStudyReview } from './review-request-service.ts';
+import { resolveStoredDesigns } from './element-pattern-service.ts';
 import { findStudyFor } from './study-access.ts';
 
 /** Ranked rows printed; a packet is read, not searched. */
@@ -47,6 +48,9 @@ export interface PacketChartPoint {
   hpbwElDeg: number | null;
   scanLossDb: number | null;
   eirpDbm: number | null;
+  /** Gain and EIRP toward the intended steer (null on decisions recorded before engine 1.1.0). */
+  gainAtSteerDbi: number | null;
+  eirpAtSteerDbm: number | null;
 }
 
 export interface PacketData {
@@ -109,7 +113,12 @@ function rankCandidates(candidates: Candidate[], sheetOfCandidate: (c: Candidate
     // Stored designs are parsed on the way in; re-parse so an older row missing a default cannot break the packet.
     const parsed = DesignSchema.safeParse(c.design);
     if (!parsed.success) return [];
-    const scan = scanDesign(parsed.data, sheet);
+    let scan: ReturnType<typeof scanDesign>;
+    try {
+      scan = scanDesign(parsed.data, sheet);
+    } catch {
+      return [];
+    }
     const row: TradeDesign = {
       designIndex: i,
       params: parsed.data as unknown as TradeParams,
@@ -140,6 +149,8 @@ function chartOf(decision: DecisionView): PacketData['chart'] {
       hpbwElDeg: m.hpbwElDeg ?? null,
       scanLossDb: m.scanLossDb ?? null,
       eirpDbm: m.eirpDbm ?? null,
+      gainAtSteerDbi: m.gainAtSteerDbi ?? null,
+      eirpAtSteerDbm: m.eirpAtSteerDbm ?? null,
     };
   });
   return { label: decision.label, axis, points: points.sort((a, b) => a.angleDeg - b.angleDeg) };
@@ -181,7 +192,10 @@ export async function buildPacket(ctx: AppContext, user: AuthUser, studyId: stri
   const sheetRow = sheetRows[0] ?? null;
   const sheet = sheetRow?.sheet ?? null;
   const sheetById = (id: string | null) => (id ? sheetRows.find((r) => r.id === id)?.sheet : undefined) ?? sheet;
-  const candidates = await ctx.db.getRepository(Candidate).find({ where: { studyId }, order: { position: 'ASC', createdAt: 'ASC' } });
+  const stored = await ctx.db.getRepository(Candidate).find({ where: { studyId }, order: { position: 'ASC', createdAt: 'ASC' } });
+  // Uploaded element patterns are filled in (a candidate whose pattern is gone is left out of the ranking).
+  const designs = await resolveStoredDesigns(ctx, studyId, stored.map((c) => c.design as { element?: unknown }));
+  const candidates = stored.map((c, i) => Object.assign(Object.create(Object.getPrototypeOf(c) as object) as Candidate, c, { design: designs[i] }));
   const history = await listDecisions(ctx, user, studyId);
   const decision = history.find((d) => d.status === 'signed') ?? null;
   const limits = sheet ? sheetLimits(sheet) : [];

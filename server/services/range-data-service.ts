@@ -8,7 +8,7 @@ import { Calibration } from '../entities/calibration.ts';
 import { RangeUpload } from '../entities/range-upload.ts';
 import { ApiError } from '../errors.ts';
 import { audit } from './audit-service.ts';
-import { benchCall, designOf } from './bench-service.ts';
+import { benchCall, benchDesign } from './bench-service.ts';
 import { candidateFor } from './candidate-service.ts';
 import { findInStudy, findStudyFor } from './study-access.ts';
 import type { RangeUploadFields } from '../../shared/bench/api-schemas.ts';
@@ -55,7 +55,7 @@ export type RangeUploadSummary = ReturnType<typeof summary>;
 export async function createRangeUpload(ctx: AppContext, user: AuthUser, candidateId: string, fields: RangeUploadFields, file: UploadedFile | undefined) {
   const candidate = await candidateFor(ctx, user, candidateId, 'edit');
   if (!file) throw new ApiError(400, 'invalid_input', 'file: is required (a CSV of angle and power)', [{ field: 'file', message: 'is required (a CSV of angle and power)' }]);
-  const design = designOf(candidate);
+  const design = await benchDesign(ctx, candidate);
   let parsed;
   try {
     parsed = parseRangeCsv(decodeText(file.buffer));

@@ -15,11 +15,22 @@ function params(design: Record<string, unknown>, row: Row): void {
   for (const c of DESIGN_PARAM_COLUMNS) row[c.column] = finite(paramValue(design as Design, c.field));
 }
 
+/**
+ * A point's design as stored: a table element keeps its patternId but not its thousands of values (the design row
+ * of the sweep and the sweep's grid keep them once).
+ */
+function pointDesign(design: Record<string, unknown>): Record<string, unknown> {
+  const e = design.element as { kind?: unknown; pattern?: unknown } | undefined;
+  if (!e || e.kind !== 'table' || e.pattern === undefined) return design;
+  const { pattern: _values, ...element } = e;
+  return { ...design, element };
+}
+
 export function pointRow(sweepId: string, p: PointResult): Row {
   const row: Row = { sweep_id: sweepId, point_index: p.index, design_index: p.designIndex, angle_index: p.angleIndex };
   params(p.design, row);
   for (const c of STEER_COLUMNS) row[c.column] = finite(p.design[c.field] ?? null);
-  row.design = p.design;
+  row.design = pointDesign(p.design);
   for (const c of METRIC_COLUMNS) row[c.column] = p.metrics ? finite(p.metrics[c.field] ?? null) : null;
   row.metrics = p.metrics;
   row.error = p.error;

@@ -3,7 +3,7 @@
  * parse or whose evaluation throws is returned with its message and the run goes on.
  */
 import { evaluateDesign } from '../engine/index.ts';
-import { DesignSchema } from '../schemas/design.ts';
+import { parsePointDesign } from './parse-point.ts';
 import { formatIssue } from '../schemas/format-issue.ts';
 import type { PointResult } from './chunk.ts';
 import type { CompiledGrid } from './grid.ts';
@@ -13,7 +13,7 @@ export function evaluateRange(grid: CompiledGrid, start: number, end: number): P
   for (let index = start; index < Math.min(end, grid.points); index++) {
     const point = grid.pointAt(index);
     const base = { index, designIndex: point.designIndex, angleIndex: point.angleIndex };
-    const parsed = DesignSchema.safeParse(point.input);
+    const parsed = parsePointDesign(point.input as Record<string, unknown>);
     if (!parsed.success) {
       out.push({ ...base, design: point.input as Record<string, unknown>, metrics: null, error: formatIssue(parsed.error) });
       continue;
