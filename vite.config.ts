@@ -11,7 +11,9 @@ export default defineConfig({
   plugins: [
     vue(),
     // Each <a-…> tag imports only its own ant-design-vue component (v4 styles are CSS-in-JS: nothing else to import).
-    Components({ resolvers: [AntDesignVueResolver({ importStyle: false, resolveIcons: false })], dts: false, dirs: [] }),
+    // Not under vitest: component tests register ant-design-vue themselves (its CommonJS build, as Node resolves
+    // it), and the resolver's ES-module imports would load a second copy of the library into every test.
+    { ...Components({ resolvers: [AntDesignVueResolver({ importStyle: false, resolveIcons: false })], dts: false, dirs: [] }), apply: (_config, env) => env.mode !== 'test' },
     // Brotli and gzip copies beside each built asset, served as they are by the server (no compression per request).
     compression({ algorithms: ['brotliCompress', 'gzip'], threshold: 1024, logLevel: 'silent' }),
   ],
