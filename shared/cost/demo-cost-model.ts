@@ -48,7 +48,7 @@ export const COST_FIELD_NOTES: Record<CostModelField, CostFieldNote> = {
   chipPrice: invented('Price per beamformer chip', 'currency'),
   elementPrice: invented('Price per radiating element', 'currency'),
   boardPricePerMm2: invented('Antenna board price', 'currency per mm²'),
-  boardMarginMm: invented('Board margin around the aperture', 'mm, each side', 'invented: ground clearance and mounting around the elements'),
+  boardMarginMm: invented('Board margin', 'mm, each side', 'invented: ground clearance and mounting around the elements'),
   modulePrice: invented('Fixed price per module', 'currency', 'invented: connector, assembly and test'),
   paEfficiency: recalled('PA efficiency (P_out / P_dc)', 'fraction 0–1', 'mm-wave silicon PAs at their working back-off are often quoted around 10–25 %; 0.2 is a round figure from memory, not a datasheet value'),
   channelOverheadW: recalled('Overhead per channel', 'W', 'phase shifter, LNA and bias: tens of mW per channel is the usual order, recalled from memory'),
