@@ -5,7 +5,7 @@ import { requireAuth, userOf } from '../middleware/require-auth.ts';
 import { validate } from '../middleware/validate.ts';
 import { createToken, listTokens, revokeToken } from '../services/api-token-service.ts';
 import { changePassword, updateProfile } from '../services/user-service.ts';
-import { meOf } from './me.ts';
+import { meOf } from '../services/me-service.ts';
 
 /** /api/account: your own name, password and personal API tokens. */
 export function accountRouter(ctx: AppContext): Router {

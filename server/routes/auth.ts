@@ -10,7 +10,7 @@ import type { AppContext } from '../context.ts';
 import { validate } from '../middleware/validate.ts';
 import { audit } from '../services/audit-service.ts';
 import { checkResetLink, requestPasswordReset, resetPassword } from '../services/password-reset-service.ts';
-import { meOf } from './me.ts';
+import { meOf } from '../services/me-service.ts';
 
 /** /api/auth: CSRF token, sign-in, sign-out and password reset (all reachable signed out). */
 export function authRouter(ctx: AppContext): Router {

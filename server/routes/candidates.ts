@@ -1,7 +1,7 @@
 /** Candidates: the list and create under /api/studies/:id/candidates, one candidate under /api/candidates/:id. */
 import { Router, type Request } from 'express';
 import type { AppContext } from '../context.ts';
-import { requireAuth, requireRole } from '../middleware/require-auth.ts';
+import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts';
 import { validate } from '../middleware/validate.ts';
 import { createCandidate, deleteCandidate, getCandidate, listCandidates, patchCandidate } from '../services/candidate-service.ts';
 import {
@@ -19,10 +19,10 @@ const idOf = (req: Request) => String(req.params.id);
 export function studyCandidatesRouter(ctx: AppContext): Router {
   const router = Router({ mergeParams: true });
   router.get('/', requireAuth, id, async (req, res) => {
-    res.json(await listCandidates(ctx, req.user!, idOf(req)));
+    res.json(await listCandidates(ctx, userOf(req), idOf(req)));
   });
   router.post('/', requireRole('engineer'), id, validate({ body: CandidateCreateSchema }), async (req, res) => {
-    res.status(201).json(await createCandidate(ctx, req.user!, idOf(req), req.body as CandidateCreate));
+    res.status(201).json(await createCandidate(ctx, userOf(req), idOf(req), req.body as CandidateCreate));
   });
   return router;
 }
@@ -30,13 +30,13 @@ export function studyCandidatesRouter(ctx: AppContext): Router {
 export function candidatesRouter(ctx: AppContext): Router {
   const router = Router();
   router.get('/:id', requireAuth, id, async (req, res) => {
-    res.json(await getCandidate(ctx, req.user!, idOf(req)));
+    res.json(await getCandidate(ctx, userOf(req), idOf(req)));
   });
   router.patch('/:id', requireRole('engineer'), id, validate({ body: CandidatePatchSchema }), async (req, res) => {
-    res.json(await patchCandidate(ctx, req.user!, idOf(req), req.body as CandidatePatch));
+    res.json(await patchCandidate(ctx, userOf(req), idOf(req), req.body as CandidatePatch));
   });
   router.delete('/:id', requireRole('engineer'), id, async (req, res) => {
-    await deleteCandidate(ctx, req.user!, idOf(req));
+    await deleteCandidate(ctx, userOf(req), idOf(req));
     res.status(204).end();
   });
   return router;

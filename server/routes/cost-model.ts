@@ -1,7 +1,7 @@
 /** A study's cost-and-power model under /api/studies/:id/cost-model (mounted by the studies router). */
 import { Router } from 'express';
 import type { AppContext } from '../context.ts';
-import { requireAuth, requireRole } from '../middleware/require-auth.ts';
+import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts';
 import { validate } from '../middleware/validate.ts';
 import { getCostModel, putCostModel } from '../services/cost-model-service.ts';
 import { CostModelSchema, type CostModel } from '../../shared/cost/cost-model.ts';
@@ -12,10 +12,10 @@ const id = validate({ params: IdParamsSchema });
 export function studyCostModelRouter(ctx: AppContext): Router {
   const router = Router({ mergeParams: true });
   router.get('/', requireAuth, id, async (req, res) => {
-    res.json(await getCostModel(ctx, req.user!, String(req.params.id)));
+    res.json(await getCostModel(ctx, userOf(req), String(req.params.id)));
   });
   router.put('/', requireRole('engineer'), id, validate({ body: CostModelSchema }), async (req, res) => {
-    res.json(await putCostModel(ctx, req.user!, String(req.params.id), req.body as CostModel));
+    res.json(await putCostModel(ctx, userOf(req), String(req.params.id), req.body as CostModel));
   });
   return router;
 }

@@ -1,7 +1,7 @@
 /** Devices: the list and create under /api/studies/:id/devices, one device under /api/devices/:id. */
 import { Router, type Request } from 'express';
 import type { AppContext } from '../context.ts';
-import { requireAuth, requireRole } from '../middleware/require-auth.ts';
+import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts';
 import { validate } from '../middleware/validate.ts';
 import { createDevice, deleteDevice, getDevice, listDevices, patchDevice, sweepDevice } from '../services/device-service.ts';
 import { deviceSweepQueueFull } from '../devices/device-sweep-pool.ts';
@@ -17,10 +17,10 @@ const idOf = (req: Request) => String(req.params.id);
 export function studyDevicesRouter(ctx: AppContext): Router {
   const router = Router({ mergeParams: true });
   router.get('/', requireAuth, id, async (req, res) => {
-    res.json(await listDevices(ctx, req.user!, idOf(req)));
+    res.json(await listDevices(ctx, userOf(req), idOf(req)));
   });
   router.post('/', requireRole('engineer'), id, validate({ body: DeviceCreateSchema }), async (req, res) => {
-    res.status(201).json(await createDevice(ctx, req.user!, idOf(req), req.body as DeviceCreate));
+    res.status(201).json(await createDevice(ctx, userOf(req), idOf(req), req.body as DeviceCreate));
   });
   return router;
 }
@@ -28,10 +28,10 @@ export function studyDevicesRouter(ctx: AppContext): Router {
 export function devicesRouter(ctx: AppContext): Router {
   const router = Router();
   router.get('/:id', requireAuth, id, async (req, res) => {
-    res.json(await getDevice(ctx, req.user!, idOf(req)));
+    res.json(await getDevice(ctx, userOf(req), idOf(req)));
   });
   router.patch('/:id', requireRole('engineer'), id, validate({ body: DevicePatchSchema }), async (req, res) => {
-    res.json(await patchDevice(ctx, req.user!, idOf(req), req.body as DevicePatch));
+    res.json(await patchDevice(ctx, userOf(req), idOf(req), req.body as DevicePatch));
   });
   // Reading is enough: a sweep stores nothing, it answers the variants' coverage rows.
   router.post('/:id/sweep', requireAuth, id, validate({ body: DeviceSweepRequestSchema }), async (req, res) => {
@@ -41,13 +41,13 @@ export function devicesRouter(ctx: AppContext): Router {
       if (!res.writableEnded) abort.abort();
     });
     try {
-      res.json(await sweepDevice(ctx, req.user!, idOf(req), req.body as DeviceSweepRequest, abort.signal));
+      res.json(await sweepDevice(ctx, userOf(req), idOf(req), req.body as DeviceSweepRequest, abort.signal));
     } catch (err) {
       if (!abort.signal.aborted) throw err;
     }
   });
   router.delete('/:id', requireRole('engineer'), id, async (req, res) => {
-    await deleteDevice(ctx, req.user!, idOf(req));
+    await deleteDevice(ctx, userOf(req), idOf(req));
     res.status(204).end();
   });
   return router;

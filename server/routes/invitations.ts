@@ -3,7 +3,7 @@ import { AcceptInviteBody, TokenParams } from '../auth/schemas.ts';
 import type { AppContext } from '../context.ts';
 import { validate } from '../middleware/validate.ts';
 import { acceptInvitation, describeInvitation } from '../services/invitation-service.ts';
-import { meOf } from './me.ts';
+import { meOf } from '../services/me-service.ts';
 
 /** /api/invitations/:token: what an invitee sees and does before having an account (reachable signed out). */
 export function invitationsRouter(ctx: AppContext): Router {

@@ -4,7 +4,7 @@
  */
 import { Router, type Request } from 'express';
 import type { AppContext } from '../context.ts';
-import { requireAuth, requireRole } from '../middleware/require-auth.ts';
+import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts';
 import { validate } from '../middleware/validate.ts';
 import {
   createStudy,
@@ -43,29 +43,29 @@ function exportFileName(name: string): string {
 export function studiesRouter(ctx: AppContext): Router {
   const router = Router();
   router.get('/', requireAuth, validate({ query: StudyListQuerySchema }), async (req, res) => {
-    res.json(await listStudies(ctx, req.user!, req.query as unknown as { archived: boolean }));
+    res.json(await listStudies(ctx, userOf(req), req.query as unknown as { archived: boolean }));
   });
   router.post('/', requireRole('engineer'), validate({ body: StudyCreateSchema }), async (req, res) => {
-    res.status(201).json(await createStudy(ctx, req.user!, req.body as StudyCreate));
+    res.status(201).json(await createStudy(ctx, userOf(req), req.body as StudyCreate));
   });
   router.post('/import', requireRole('engineer'), validate({ body: StudyExportSchema }), async (req, res) => {
-    res.status(201).json(await importStudy(ctx, req.user!, req.body as StudyExport));
+    res.status(201).json(await importStudy(ctx, userOf(req), req.body as StudyExport));
   });
   router.get('/:id', requireAuth, id, async (req, res) => {
-    res.json(await getStudy(ctx, req.user!, idOf(req)));
+    res.json(await getStudy(ctx, userOf(req), idOf(req)));
   });
   router.patch('/:id', requireRole('engineer'), id, validate({ body: StudyPatchSchema }), async (req, res) => {
-    res.json(await patchStudy(ctx, req.user!, idOf(req), req.body as StudyPatch));
+    res.json(await patchStudy(ctx, userOf(req), idOf(req), req.body as StudyPatch));
   });
   router.delete('/:id', requireRole('engineer'), id, async (req, res) => {
-    await deleteStudy(ctx, req.user!, idOf(req));
+    await deleteStudy(ctx, userOf(req), idOf(req));
     res.status(204).end();
   });
   router.post('/:id/duplicate', requireRole('engineer'), id, async (req, res) => {
-    res.status(201).json(await duplicateStudy(ctx, req.user!, idOf(req)));
+    res.status(201).json(await duplicateStudy(ctx, userOf(req), idOf(req)));
   });
   router.get('/:id/export', requireAuth, id, async (req, res) => {
-    const file = await exportStudy(ctx, req.user!, idOf(req));
+    const file = await exportStudy(ctx, userOf(req), idOf(req));
     res.attachment(exportFileName(file.study.name)).json(file);
   });
   router.use('/:id/candidates', studyCandidatesRouter(ctx));

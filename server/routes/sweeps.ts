@@ -7,7 +7,7 @@ import { DesignsQuerySchema, PointsQuerySchema, type ResultsQuery } from '../../
 import { SweepIdParamsSchema, SweepRequestSchema, type SweepRequest } from '../../shared/sweep/request.ts';
 import type { AppContext } from '../context.ts';
 import { eventStreamSlot, streamProgress } from '../sweeps/progress-stream.ts';
-import { requireAuth, requireRole } from '../middleware/require-auth.ts';
+import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts';
 import { validate } from '../middleware/validate.ts';
 import { listDesigns, listPoints, writePointsCsv } from '../services/sweep-results.ts';
 import { cachedPage, pageKey, sendPage, sweepStateFor } from '../services/sweep-page-cache.ts';
@@ -20,35 +20,35 @@ const queryOf = (req: Request) => req.query as unknown as ResultsQuery;
 export function sweepsRouter(ctx: AppContext): Router {
   const router = Router();
   router.post('/studies/:id/sweeps', requireRole('engineer'), id, validate({ body: SweepRequestSchema }), async (req, res) => {
-    res.status(201).json(await createSweep(ctx, req.user!, idOf(req), req.body as SweepRequest));
+    res.status(201).json(await createSweep(ctx, userOf(req), idOf(req), req.body as SweepRequest));
   });
   router.get('/studies/:id/sweeps', requireAuth, id, async (req, res) => {
-    res.json(await listSweeps(ctx, req.user!, idOf(req)));
+    res.json(await listSweeps(ctx, userOf(req), idOf(req)));
   });
   router.get('/sweeps/:id', requireAuth, id, async (req, res) => {
-    res.json(await getSweep(ctx, req.user!, idOf(req)));
+    res.json(await getSweep(ctx, userOf(req), idOf(req)));
   });
   router.get('/sweeps/:id/events', requireAuth, eventStreamSlot(ctx), id, (req, res) => streamProgress(ctx, req, res));
   router.post('/sweeps/:id/cancel', requireRole('engineer'), id, async (req, res) => {
-    res.json(await cancelSweep(ctx, req.user!, idOf(req)));
+    res.json(await cancelSweep(ctx, userOf(req), idOf(req)));
   });
   // Pages of a finished sweep come from the page cache (access checked on every request; see sweep-page-cache.ts).
   router.get('/sweeps/:id/results', requireAuth, id, validate({ query: PointsQuerySchema }), async (req, res) => {
-    const state = await sweepStateFor(ctx, req.user!, idOf(req));
+    const state = await sweepStateFor(ctx, userOf(req), idOf(req));
     const page = await cachedPage(pageKey('points', state, JSON.stringify(queryOf(req))), async () =>
-      listPoints(ctx, await findSweepFor(ctx, req.user!, idOf(req), 'read'), queryOf(req)),
+      listPoints(ctx, await findSweepFor(ctx, userOf(req), idOf(req), 'read'), queryOf(req)),
     );
     sendPage(res, page);
   });
   router.get('/sweeps/:id/designs', requireAuth, id, validate({ query: DesignsQuerySchema }), async (req, res) => {
-    const state = await sweepStateFor(ctx, req.user!, idOf(req));
+    const state = await sweepStateFor(ctx, userOf(req), idOf(req));
     const page = await cachedPage(pageKey('designs', state, JSON.stringify(queryOf(req))), async () =>
-      listDesigns(ctx, await findSweepFor(ctx, req.user!, idOf(req), 'read'), queryOf(req)),
+      listDesigns(ctx, await findSweepFor(ctx, userOf(req), idOf(req), 'read'), queryOf(req)),
     );
     sendPage(res, page);
   });
   router.get('/sweeps/:id/results.csv', requireAuth, id, async (req, res) => {
-    const sweep = await findSweepFor(ctx, req.user!, idOf(req), 'read');
+    const sweep = await findSweepFor(ctx, userOf(req), idOf(req), 'read');
     const file = `${sweep.name.replace(/[^\w.-]+/g, '-').slice(0, 80) || 'sweep'}.csv`;
     res.writeHead(200, { 'content-type': 'text/csv; charset=utf-8', 'content-disposition': `attachment; filename="${file}"` });
     await writePointsCsv(ctx, sweep, res);

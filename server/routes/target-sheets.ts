@@ -4,7 +4,7 @@
  */
 import { Router } from 'express';
 import type { AppContext } from '../context.ts';
-import { requireAuth, requireRole } from '../middleware/require-auth.ts';
+import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts';
 import { validate } from '../middleware/validate.ts';
 import {
   createTargetSheet,
@@ -31,10 +31,10 @@ const sheetParams = validate({ params: SheetParamsSchema });
 export function studyTargetSheetRouter(ctx: AppContext): Router {
   const router = Router({ mergeParams: true });
   router.get('/', requireAuth, id, async (req, res) => {
-    res.json(await getTargetSheet(ctx, req.user!, String(req.params.id)));
+    res.json(await getTargetSheet(ctx, userOf(req), String(req.params.id)));
   });
   router.put('/', requireRole('engineer'), id, validate({ body: TargetSheetPutSchema }), async (req, res) => {
-    res.json(await putTargetSheet(ctx, req.user!, String(req.params.id), req.body as TargetSheetPut));
+    res.json(await putTargetSheet(ctx, userOf(req), String(req.params.id), req.body as TargetSheetPut));
   });
   return router;
 }
@@ -43,19 +43,19 @@ export function studyTargetSheetRouter(ctx: AppContext): Router {
 export function studyTargetSheetsRouter(ctx: AppContext): Router {
   const router = Router({ mergeParams: true });
   router.get('/', requireAuth, id, async (req, res) => {
-    res.json(await listTargetSheets(ctx, req.user!, String(req.params.id)));
+    res.json(await listTargetSheets(ctx, userOf(req), String(req.params.id)));
   });
   router.post('/', requireRole('engineer'), id, validate({ body: TargetSheetCreateSchema }), async (req, res) => {
-    res.status(201).json(await createTargetSheet(ctx, req.user!, String(req.params.id), req.body as TargetSheetPut));
+    res.status(201).json(await createTargetSheet(ctx, userOf(req), String(req.params.id), req.body as TargetSheetPut));
   });
   router.get('/:sheetId', requireAuth, sheetParams, async (req, res) => {
-    res.json(await getTargetSheetById(ctx, req.user!, String(req.params.id), String(req.params.sheetId)));
+    res.json(await getTargetSheetById(ctx, userOf(req), String(req.params.id), String(req.params.sheetId)));
   });
   router.put('/:sheetId', requireRole('engineer'), sheetParams, validate({ body: TargetSheetPutSchema }), async (req, res) => {
-    res.json(await putTargetSheetById(ctx, req.user!, String(req.params.id), String(req.params.sheetId), req.body as TargetSheetPut));
+    res.json(await putTargetSheetById(ctx, userOf(req), String(req.params.id), String(req.params.sheetId), req.body as TargetSheetPut));
   });
   router.delete('/:sheetId', requireRole('engineer'), sheetParams, async (req, res) => {
-    await deleteTargetSheet(ctx, req.user!, String(req.params.id), String(req.params.sheetId));
+    await deleteTargetSheet(ctx, userOf(req), String(req.params.id), String(req.params.sheetId));
     res.status(204).end();
   });
   return router;

@@ -7,6 +7,7 @@ import type { Request, RequestHandler, Response } from 'express';
 import type { AppContext } from '../context.ts';
 import { FINISHED_STATUSES } from '../entities/sweep.ts';
 import { ApiError } from '../errors.ts';
+import { userOf } from '../middleware/require-auth.ts';
 import { userSlots } from '../middleware/user-slots.ts';
 import { getSweep, type SweepProgress } from '../services/sweep-service.ts';
 import { findAuthUser } from '../services/user-service.ts';
@@ -33,9 +34,9 @@ async function progressNow(ctx: AppContext, userId: string, sweepId: string): Pr
 }
 
 export async function streamProgress(ctx: AppContext, req: Request, res: Response): Promise<void> {
-  const userId = req.user!.id;
+  const userId = userOf(req).id;
   const sweepId = String(req.params.id);
-  const first = await getSweep(ctx, req.user!, sweepId);
+  const first = await getSweep(ctx, userOf(req), sweepId);
   res.writeHead(200, { 'content-type': 'text/event-stream', 'cache-control': 'no-cache', connection: 'keep-alive', 'x-accel-buffering': 'no' });
   let last = '';
   let lastSent = Date.now();
