@@ -14,6 +14,7 @@ import type { DesignScan } from '../packet/design-scan.ts';
 import { runRequestTask } from '../compute/request-pool.ts';
 import { findSweepDesign } from '../packet/sweep-design.ts';
 import { ENGINE_VERSION } from '../../shared/engine/index.ts';
+import { resolveElementPatterns } from './element-pattern-service.ts';
 import type { Design } from '../../shared/schemas/design.ts';
 import { parseSweepDesignId, type DecisionCreate, type DecisionPatch } from '../../shared/schemas/review.ts';
 import { checkAgainstSheet, type SheetCheck } from '../../shared/targets/check.ts';
@@ -100,7 +101,9 @@ async function resolveDesign(
     return { label: label ?? found.label, design: found.params, metrics: found.metrics, source: design, ...sheetPart(found.metrics) };
   }
   // A design evaluated at every judged steering angle: on the request pool, not the event loop.
-  const scan = await runRequestTask<DesignScan>({ kind: 'scan-design', design: design as Design, sheet: judged.sheet });
+  // An uploaded element pattern is named by id in the design; the engine needs its values (the row keeps the id).
+  const withPattern = await resolveElementPatterns({ db: m } as unknown as AppContext, { studyId }, [design as Design], () => 'design.element.patternId');
+  const scan = await runRequestTask<DesignScan>({ kind: 'scan-design', design: withPattern[0]!, sheet: judged.sheet });
   const metrics: FrozenMetrics = {
     at: scan.at as unknown as Record<string, unknown>,
     axis: scan.axis,
