@@ -93,6 +93,14 @@ function check(design: Design, ref: ReturnType<typeof refMetrics>): void {
     ['eirpDbm', m.eirpDbm, ref.eirpDbm],
     ['eirpAtSteerDbm', m.eirpAtSteerDbm, ref.eirpAtSteerDbm],
   ] as const;
+  expect(Math.abs(m.taperEfficiencyDb - ref.taperEfficiencyDb), `taperEfficiency ${tag}`).toBeLessThanOrEqual(0.01);
+  // Pointing error is an angle between two peaks found independently: the angle accuracy (0.1°) applies.
+  expect(m.pointingErrorDeg === null, `pointingError null ${tag}`).toBe(ref.pointingErrorDeg === null);
+  if (m.pointingErrorDeg !== null) expect(Math.abs(m.pointingErrorDeg - ref.pointingErrorDeg!), `pointingError ${tag}`).toBeLessThanOrEqual(0.1);
+  for (const [name, got, want] of [['gratingLobeOnsetAzDeg', m.gratingLobeOnsetAzDeg, ref.gratingLobeOnsetAzDeg], ['gratingLobeOnsetElDeg', m.gratingLobeOnsetElDeg, ref.gratingLobeOnsetElDeg]] as const) {
+    expect(got === null, `${name} null ${tag}`).toBe(want === null);
+    if (got !== null && want !== null) expect(Math.abs(got - want), `${name} ${tag}`).toBeLessThanOrEqual(0.01);
+  }
   for (const [name, got, want] of nullable) {
     expect(got === null, `${name} null ${tag}`).toBe(want === null);
     if (got !== null && want !== null) expect(Math.abs(got - want), `${name} ${tag}`).toBeLessThanOrEqual(0.1);

@@ -327,6 +327,51 @@ export interface RefMetrics {
   conductedPowerDbm: number | null;
   eirpDbm: number | null;
   eirpAtSteerDbm: number | null;
+  pointingErrorDeg: number | null;
+  taperEfficiencyDb: number;
+  gratingLobeOnsetAzDeg: number | null;
+  gratingLobeOnsetElDeg: number | null;
+}
+
+/** Angle in degrees between two (az, el) directions, from their unit vectors (u, v, w). */
+function refAngleDeg(az1: number, el1: number, az2: number, el2: number): number {
+  const vec = (az: number, el: number) => [Math.sin(az * D2R) * Math.cos(el * D2R), Math.sin(el * D2R), Math.cos(az * D2R) * Math.cos(el * D2R)];
+  const [a, b] = [vec(az1, el1), vec(az2, el2)];
+  const dot = a[0]! * b[0]! + a[1]! * b[1]! + a[2]! * b[2]!;
+  return Math.acos(Math.max(-1, Math.min(1, dot))) / D2R;
+}
+
+/** (Σw)²/(N·Σw²) of the taper product over every element, in dB (the taper as designed, before any attenuator). */
+function refTaperEfficiencyDb(design: Design): number {
+  const tx = taperWeights(design.taperX, design.nx);
+  const ty = taperWeights(design.taperY, design.ny);
+  let s1 = 0;
+  let s2 = 0;
+  for (let n = 0; n < design.ny; n++) for (let m = 0; m < design.nx; m++) {
+    const w = tx[m]! * ty[n]!;
+    s1 += w;
+    s2 += w * w;
+  }
+  return 10 * Math.log10((s1 * s1) / (design.nx * design.ny * s2));
+}
+
+/**
+ * Smallest steer from broadside (degrees) at which the first lattice copy of the beam, at sin θ0 − λ/d, is inside
+ * the visible region, found by bisection on that visibility test; null for an axis of one element.
+ */
+function refGratingOnsetDeg(n: number, pitchMm: number, lambdaMm: number): number | null {
+  if (n <= 1) return null;
+  const visible = (deg: number) => Math.abs(Math.sin(deg * D2R) - lambdaMm / pitchMm) <= 1;
+  if (visible(0)) return 0;
+  let lo = 0;
+  let hi = 90;
+  if (!visible(hi)) return 90;
+  for (let i = 0; i < 60; i++) {
+    const mid = (lo + hi) / 2;
+    if (visible(mid)) hi = mid;
+    else lo = mid;
+  }
+  return hi;
 }
 
 /** Element gain defaults written out again: isotropic 0, cos^q θ 2(q + 1), TR 38.901 8 dBi; element.gainDbi wins. */
@@ -384,5 +429,9 @@ export function refMetrics(design: Design, opts: { coarseDeg: number; cutStepDeg
     sllAzDb: az.sllDb,
     sllElDb: el.sllDb,
     directivityDbi: 10 * Math.log10((4 * Math.PI * pk.p) / refSpherePower(a, opts.naz, opts.nv)),
+    pointingErrorDeg: design.codes ? null : refAngleDeg(pk.az, pk.el, design.steerAzDeg, design.steerElDeg),
+    taperEfficiencyDb: refTaperEfficiencyDb(design),
+    gratingLobeOnsetAzDeg: refGratingOnsetDeg(design.nx, design.dxMm, (C / (design.frequencyGHz * 1e9)) * 1e3),
+    gratingLobeOnsetElDeg: refGratingOnsetDeg(design.ny, design.dyMm, (C / (design.frequencyGHz * 1e9)) * 1e3),
   };
 }
