@@ -3,13 +3,13 @@
  * cancel, and read results (points, design rows, CSV). Mounted at /api.
  */
 import { Router, type Request } from 'express';
-import { DesignsQuerySchema, PointsQuerySchema, type ResultsQuery } from '../../shared/sweep/results-query.ts';
+import { DesignsQuerySchema, PointsQuerySchema, SteerSpanQuerySchema, type ResultsQuery } from '../../shared/sweep/results-query.ts';
 import { SweepIdParamsSchema, SweepRequestSchema, type SweepRequest } from '../../shared/sweep/request.ts';
 import type { AppContext } from '../context.ts';
 import { eventStreamSlot, streamProgress } from '../sweeps/progress-stream.ts';
 import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts';
 import { validate } from '../middleware/validate.ts';
-import { listDesigns, listPoints, writePointsCsv } from '../services/sweep-results.ts';
+import { listDesigns, listPoints, steerSpan, writePointsCsv } from '../services/sweep-results.ts';
 import { cachedPage, pageKey, sendPage, sweepStateFor } from '../services/sweep-page-cache.ts';
 import { cancelSweep, createSweep, findSweepFor, getSweep, listSweeps } from '../services/sweep-service.ts';
 
@@ -46,6 +46,9 @@ export function sweepsRouter(ctx: AppContext): Router {
       listDesigns(ctx, await findSweepFor(ctx, userOf(req), idOf(req), 'read'), queryOf(req)),
     );
     sendPage(res, page);
+  });
+  router.get('/sweeps/:id/steer-span', requireAuth, id, validate({ query: SteerSpanQuerySchema }), async (req, res) => {
+    res.json(await steerSpan(ctx, await findSweepFor(ctx, userOf(req), idOf(req), 'read')));
   });
   router.get('/sweeps/:id/results.csv', requireAuth, id, async (req, res) => {
     const sweep = await findSweepFor(ctx, userOf(req), idOf(req), 'read');

@@ -12,12 +12,9 @@ import { safeText } from '../../shared/export/safe-cell.ts';
 import { buildQuery } from './sweep-query.ts';
 import { windowedDesignsCte } from './sweep-scan-window.ts';
 import { scheduleReprice, sweepCostBasis } from './sweep-pricing.ts';
-import type { SweepCostBasis } from '../../shared/cost/cost-model.ts';
+import type { DesignRow, DesignsPage, Page, SteerSpanAnswer } from '../../shared/api/sweeps.ts';
 
-export interface Page<T> {
-  total: number;
-  rows: T[];
-}
+export type { DesignRow, DesignsPage, Page } from '../../shared/api/sweeps.ts';
 
 export async function listPoints(ctx: AppContext, sweep: Sweep, q: ResultsQuery): Promise<Page<PointRow>> {
   const { where, order, params } = buildQuery(sweep.id, q, POINT_COLUMNS, 'point_index');
@@ -30,12 +27,7 @@ export async function listPoints(ctx: AppContext, sweep: Sweep, q: ResultsQuery)
   return { total, rows };
 }
 
-export type DesignRow = Record<string, unknown> & { designIndex: number; design: Record<string, unknown> };
-
 const select = (cols: ColumnDef[]) => cols.map((c) => `${c.column} AS "${c.field}"`).join(', ');
-
-/** Design rows, and which cost model priced them (the figures are re-priced whenever the study's model is saved). */
-export type DesignsPage = Page<DesignRow> & { cost: SweepCostBasis };
 
 /** Design rows; with a scan window (q.scanAz / q.scanEl) their figures cover only the points steered inside it. */
 export async function listDesigns(ctx: AppContext, sweep: Sweep, q: ResultsQuery): Promise<DesignsPage> {
@@ -52,6 +44,18 @@ export async function listDesigns(ctx: AppContext, sweep: Sweep, q: ResultsQuery
   // Figures behind the study's model (a re-pricing cut short by a restart) are brought up to date in the background.
   if (!cost.current && cost.currentVersion !== null) void scheduleReprice(ctx.db, ctx.log, sweep.studyId);
   return { total, rows, cost };
+}
+
+/** The steering every design of the sweep covers (a grid is a product, so one span fits all), in one query. */
+export async function steerSpan(ctx: AppContext, sweep: Sweep): Promise<SteerSpanAnswer> {
+  const [r] = (await ctx.db.query(
+    `SELECT min(steer_az_deg) AS "azMinDeg", max(steer_az_deg) AS "azMaxDeg", min(steer_el_deg) AS "elMinDeg", max(steer_el_deg) AS "elMaxDeg"
+     FROM sweep_points WHERE sweep_id = $1`,
+    [sweep.id],
+  )) as [Record<'azMinDeg' | 'azMaxDeg' | 'elMinDeg' | 'elMaxDeg', number | null>];
+  const { azMinDeg, azMaxDeg, elMinDeg, elMaxDeg } = r;
+  if (azMinDeg === null || azMaxDeg === null || elMinDeg === null || elMaxDeg === null) return { span: null };
+  return { span: { azMinDeg, azMaxDeg, elMinDeg, elMaxDeg } };
 }
 
 const CSV_BATCH = 2000;

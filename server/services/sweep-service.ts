@@ -8,34 +8,15 @@ import { GridTooLarge, compileGrid } from '../../shared/sweep/grid.ts';
 import type { SweepRequest } from '../../shared/sweep/request.ts';
 import type { AuthUser } from '../auth/types.ts';
 import type { AppContext } from '../context.ts';
+import type { SweepProgress as SharedSweepProgress } from '../../shared/api/sweeps.ts';
 import { FINISHED_STATUSES, Sweep, type SweepStatus } from '../entities/sweep.ts';
 import { Conflict, invalidInput } from '../errors.ts';
 import { findInStudy, findStudyFor, type StudyNeed } from './study-access.ts';
 import { resolveGridElements } from './element-pattern-service.ts';
 import { assertSheetOfStudy } from './target-sheet-service.ts';
 
-export interface SweepProgress {
-  id: string;
-  studyId: string;
-  name: string;
-  status: SweepStatus;
-  pointsTotal: number;
-  pointsDone: number;
-  pointsFailed: number;
-  designsTotal: number;
-  anglesPerDesign: number;
-  /** Points per second since the sweep started (null before it starts). */
-  ratePerSecond: number | null;
-  /** Estimated seconds left at that rate (0 when finished, null when unknown). */
-  etaSeconds: number | null;
-  engineVersion: string;
-  error: string | null;
-  /** The sheet that judges its designs; null: the study's first. */
-  targetSheetId: string | null;
-  createdAt: Date;
-  startedAt: Date | null;
-  finishedAt: Date | null;
-}
+/** A sweep's state as the routes answer it (shared/api/sweeps.ts). */
+export type SweepProgress = SharedSweepProgress<Date>;
 
 export function progressOf(s: Sweep, now = Date.now()): SweepProgress {
   const finished = FINISHED_STATUSES.has(s.status);

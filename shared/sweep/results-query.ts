@@ -154,3 +154,6 @@ function makeSchema(columns: ColumnDef[], withScanWindow: boolean) {
 
 export const PointsQuerySchema = makeSchema(POINT_COLUMNS, false);
 export const DesignsQuerySchema = makeSchema(DESIGN_COLUMNS, true);
+
+/** GET /api/sweeps/:id/steer-span takes no parameters; anything sent is refused by name rather than ignored. */
+export const SteerSpanQuerySchema = z.object({}).strict();

@@ -1,6 +1,6 @@
 /** Submit state of a form: busy while its action runs, and the server's refusal as form feedback. */
 import { ref } from 'vue';
-import { formFailure, type FormFailure } from '@/components/account/form-errors';
+import { formFailure, type FormFailure } from '@/api/errors';
 
 export function useFormSubmit() {
   const busy = ref(false);

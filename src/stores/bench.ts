@@ -15,7 +15,7 @@ import type { CutAnalysis } from '@shared/bench/analyse-cut.ts';
 import type { MeasurementAnalysis } from '@shared/bench/analyse-measurement.ts';
 import type { RangeData } from '@shared/bench/parse-range-csv.ts';
 import type { Beam } from '@shared/bench/beam.ts';
-import { errorText } from './studies';
+import { errorMessage } from '@/api/errors';
 
 export interface CalibrationView {
   candidateId: string;
@@ -64,7 +64,7 @@ export const useBenchStore = defineStore('bench', () => {
     try {
       return await f();
     } catch (err) {
-      error.value = errorText(err);
+      error.value = errorMessage(err);
       throw err;
     } finally {
       busy.value = false;

@@ -4,22 +4,12 @@
  */
 import { defineStore } from 'pinia';
 import { computed, ref } from 'vue';
-import { api } from '@/api/client';
+import { candidatesApi } from '@/api/candidates';
+import type { CandidateRow } from '@shared/api/candidates.ts';
 import type { DesignInput } from '@shared/schemas/design.ts';
-import { errorText } from './studies';
+import { errorMessage } from '@/api/errors';
 
-export interface CandidateRow {
-  id: string;
-  studyId: string;
-  name: string;
-  design: DesignInput;
-  notes: string;
-  position: number;
-  /** The study's target sheet that judges it; null: the study's first. */
-  targetSheetId?: string | null;
-  createdAt: string;
-  updatedAt: string;
-}
+export type { CandidateRow } from '@shared/api/candidates.ts';
 
 /** A first candidate that evaluates at once: a 4-element 28 GHz row at half a wavelength. */
 export const STARTER_DESIGN: DesignInput = {
@@ -59,10 +49,10 @@ export const useCandidatesStore = defineStore('candidates', () => {
     loading.value = true;
     error.value = null;
     try {
-      list.value = await api.get<CandidateRow[]>(`/api/studies/${id}/candidates`);
+      list.value = await candidatesApi.list(id);
       if (!selected.value) selectedId.value = list.value[0]?.id ?? null;
     } catch (err) {
-      error.value = errorText(err);
+      error.value = errorMessage(err);
     } finally {
       loading.value = false;
     }
@@ -70,7 +60,7 @@ export const useCandidatesStore = defineStore('candidates', () => {
 
   async function create(name: string, design: DesignInput = STARTER_DESIGN): Promise<CandidateRow> {
     if (!studyId.value) throw new Error('no study is open');
-    const created = await api.post<CandidateRow>(`/api/studies/${studyId.value}/candidates`, { name, design });
+    const created = await candidatesApi.create(studyId.value, name, design);
     list.value.push(created);
     selectedId.value = created.id;
     return created;
@@ -79,7 +69,7 @@ export const useCandidatesStore = defineStore('candidates', () => {
   const inFlight = new Set<Promise<unknown>>();
 
   async function saveDesign(id: string, design: DesignInput): Promise<CandidateRow> {
-    const request = api.patch<CandidateRow>(`/api/candidates/${id}`, { design });
+    const request = candidatesApi.patch(id, { design });
     inFlight.add(request);
     try {
       const saved = await request;
@@ -101,7 +91,7 @@ export const useCandidatesStore = defineStore('candidates', () => {
     const before = row?.name;
     if (row) row.name = name;
     try {
-      await api.patch(`/api/candidates/${id}`, { name });
+      await candidatesApi.patch(id, { name });
     } catch (err) {
       if (row && before !== undefined) row.name = before;
       throw err;
@@ -110,7 +100,7 @@ export const useCandidatesStore = defineStore('candidates', () => {
 
   /** Points the candidate at one of the study's sheets (null: the study's first). */
   async function setSheet(id: string, targetSheetId: string | null): Promise<void> {
-    const saved = await api.patch<CandidateRow>(`/api/candidates/${id}`, { targetSheetId });
+    const saved = await candidatesApi.patch(id, { targetSheetId });
     const row = list.value.find((c) => c.id === id);
     if (row) row.targetSheetId = saved.targetSheetId ?? null;
   }
@@ -119,7 +109,7 @@ export const useCandidatesStore = defineStore('candidates', () => {
     const index = list.value.findIndex((c) => c.id === id);
     const removed = index >= 0 ? list.value.splice(index, 1)[0] : undefined;
     try {
-      await api.delete(`/api/candidates/${id}`);
+      await candidatesApi.remove(id);
       overlayIds.value = overlayIds.value.filter((x) => x !== id);
       if (selectedId.value === id) selectedId.value = list.value[0]?.id ?? null;
     } catch (err) {

@@ -4,7 +4,7 @@
  */
 import { defineStore } from 'pinia';
 import { computed, ref } from 'vue';
-import { api } from '@/api/client';
+import { costApi } from '@/api/cost';
 import { costOfDesign, type CostDesign, type CostFigures, type CostMetrics, type CostModel, type CostModelView } from '@shared/cost/index.ts';
 
 export const useCostStore = defineStore('cost', () => {
@@ -13,7 +13,7 @@ export const useCostStore = defineStore('cost', () => {
   const model = computed<CostModel | null>(() => view.value?.model ?? null);
 
   async function load(id: string): Promise<CostModelView> {
-    view.value = await api.get<CostModelView>(`/api/studies/${id}/cost-model`);
+    view.value = await costApi.get(id);
     return view.value;
   }
 
@@ -23,7 +23,7 @@ export const useCostStore = defineStore('cost', () => {
   }
 
   async function save(id: string, next: CostModel): Promise<CostModelView> {
-    view.value = await api.put<CostModelView>(`/api/studies/${id}/cost-model`, next);
+    view.value = await costApi.save(id, next);
     return view.value;
   }
 

@@ -1,21 +1,13 @@
 /** Devices of the open study: the list, which one is open, and saving its changes. */
 import { defineStore } from 'pinia';
 import { computed, ref } from 'vue';
-import { api } from '@/api/client';
-import type { DeviceLayout, DeviceLayoutInput } from '@shared/schemas/device.ts';
-import { errorText } from './studies';
+import { devicesApi } from '@/api/devices';
+import type { DeviceLayoutInput } from '@shared/schemas/device.ts';
+import type { DeviceSweepField } from '@shared/devices/device-sweep.ts';
+import type { DeviceRow, DeviceSweepAnswer } from '@shared/api/devices.ts';
+import { errorMessage } from '@/api/errors';
 
-export interface DeviceRow {
-  id: string;
-  studyId: string;
-  name: string;
-  targetSheetId: string | null;
-  layout: DeviceLayout;
-  notes: string;
-  position: number;
-  createdAt: string;
-  updatedAt: string;
-}
+export type { DeviceRow } from '@shared/api/devices.ts';
 
 export const useDevicesStore = defineStore('devices', () => {
   const studyId = ref<string | null>(null);
@@ -34,10 +26,10 @@ export const useDevicesStore = defineStore('devices', () => {
     loading.value = true;
     error.value = null;
     try {
-      list.value = await api.get<DeviceRow[]>(`/api/studies/${id}/devices`);
+      list.value = await devicesApi.list(id);
       if (!selected.value) selectedId.value = list.value[0]?.id ?? null;
     } catch (err) {
-      error.value = errorText(err);
+      error.value = errorMessage(err);
     } finally {
       loading.value = false;
     }
@@ -45,21 +37,21 @@ export const useDevicesStore = defineStore('devices', () => {
 
   async function create(name: string, layout: DeviceLayoutInput, targetSheetId: string | null): Promise<DeviceRow> {
     if (!studyId.value) throw new Error('no study is open');
-    const created = await api.post<DeviceRow>(`/api/studies/${studyId.value}/devices`, { name, layout, targetSheetId });
+    const created = await devicesApi.create(studyId.value, { name, layout, targetSheetId });
     list.value.push(created);
     selectedId.value = created.id;
     return created;
   }
 
   async function save(id: string, patch: { name?: string; layout?: DeviceLayoutInput; targetSheetId?: string | null }): Promise<DeviceRow> {
-    const saved = await api.patch<DeviceRow>(`/api/devices/${id}`, patch);
+    const saved = await devicesApi.save(id, patch);
     const row = list.value.find((d) => d.id === id);
     if (row) Object.assign(row, saved);
     return saved;
   }
 
   async function remove(id: string): Promise<void> {
-    await api.delete(`/api/devices/${id}`);
+    await devicesApi.remove(id);
     list.value = list.value.filter((d) => d.id !== id);
     if (selectedId.value === id) selectedId.value = list.value[0]?.id ?? null;
   }
@@ -68,5 +60,10 @@ export const useDevicesStore = defineStore('devices', () => {
     selectedId.value = id;
   }
 
-  return { studyId, list, loading, error, selectedId, selected, load, create, save, remove, select };
+  /** Varies one module's parameters of a saved device; the server computes each variant's coverage. */
+  function sweep(id: string, moduleIndex: number, vary: Partial<Record<DeviceSweepField, number[]>>): Promise<DeviceSweepAnswer> {
+    return devicesApi.sweep(id, { moduleIndex, vary });
+  }
+
+  return { studyId, list, loading, error, selectedId, selected, load, create, save, remove, select, sweep };
 });

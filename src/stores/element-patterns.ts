@@ -7,7 +7,7 @@ import { ref, shallowRef } from 'vue';
 import { api } from '@/api/client';
 import type { DesignInput } from '@shared/schemas/design.ts';
 import type { ElementPattern } from '@shared/schemas/element-pattern.ts';
-import { errorText } from './studies';
+import { errorMessage } from '@/api/errors';
 
 export interface PatternSummary {
   id: string;
@@ -37,7 +37,7 @@ export const useElementPatternsStore = defineStore('elementPatterns', () => {
       list.value = (await api.get<{ patterns: PatternSummary[] }>(`/api/studies/${id}/element-patterns`)).patterns;
       error.value = null;
     } catch (err) {
-      error.value = errorText(err);
+      error.value = errorMessage(err);
     }
   }
 
@@ -73,7 +73,7 @@ export const useElementPatternsStore = defineStore('elementPatterns', () => {
       error.value = null;
       return made;
     } catch (err) {
-      error.value = errorText(err);
+      error.value = errorMessage(err);
       return null;
     } finally {
       busy.value = false;
@@ -85,7 +85,7 @@ export const useElementPatternsStore = defineStore('elementPatterns', () => {
       await api.delete(`/api/element-patterns/${id}`);
       if (studyId.value) await load(studyId.value);
     } catch (err) {
-      error.value = errorText(err);
+      error.value = errorMessage(err);
     }
   }
 

@@ -1,9 +1,9 @@
 /** The signed-in member's open review requests: the studies page's "waiting for me" list and the header's count. */
 import { defineStore } from 'pinia';
 import { computed, ref } from 'vue';
-import { api } from '@/api/client';
+import { reviewApi } from '@/api/review';
 import type { WaitingRequest } from '@shared/schemas/review.ts';
-import { errorText } from './studies';
+import { errorMessage } from '@/api/errors';
 
 export type { WaitingRequest };
 
@@ -15,11 +15,11 @@ export const useReviewQueueStore = defineStore('review-queue', () => {
 
   async function refresh(): Promise<void> {
     try {
-      waiting.value = await api.get<WaitingRequest[]>('/api/review-requests/waiting');
+      waiting.value = await reviewApi.waiting();
       loaded.value = true;
       error.value = null;
     } catch (err) {
-      error.value = errorText(err);
+      error.value = errorMessage(err);
     }
   }
 

@@ -4,7 +4,8 @@
  */
 import { defineStore } from 'pinia';
 import { computed, ref } from 'vue';
-import { api } from '@/api/client';
+import { reviewApi } from '@/api/review';
+import { teamApi } from '@/api/team';
 import type {
   CommentCreateInput,
   DecisionCreateInput,
@@ -14,65 +15,16 @@ import type {
   ReviewVerdict,
   StudyReview,
 } from '@shared/schemas/review.ts';
-import type { SheetCheck } from '@shared/targets/check.ts';
+import type { CommentRow, DecisionPreviewRow, DecisionRow, Member } from '@shared/api/review.ts';
 import { useReviewQueueStore } from './review-queue';
-import { errorText } from './studies';
+import { errorMessage } from '@/api/errors';
 
 export type { StudyReview, StudyReviewState } from '@shared/schemas/review.ts';
 export type RequestState = ReviewRequestState;
 export type RequestRow = ReviewRequestView;
-export type ViewState = Record<string, unknown>;
+export type { ViewState } from '@shared/api/review.ts';
 
-export interface Member {
-  id: string;
-  name: string;
-  email: string;
-  role: 'admin' | 'engineer' | 'reviewer';
-}
-
-export interface CommentRow {
-  id: string;
-  author: { id: string; name: string };
-  body: string;
-  target: { kind: 'study' | 'design' | 'chart'; ref: string | null };
-  viewState: ViewState | null;
-  mentions: { id: string; name: string }[];
-  createdAt: string;
-  link: string;
-}
-
-export interface FrozenPoint {
-  steerAzDeg: number;
-  steerElDeg: number;
-  metrics: Record<string, unknown>;
-}
-
-export interface DecisionRow {
-  id: string;
-  label: string;
-  design: Record<string, unknown>;
-  metrics: { at: Record<string, unknown> | null; axis: 'az' | 'el'; points: FrozenPoint[]; figures: Record<string, number | boolean | null>; basis?: string };
-  engineVersion: string;
-  source: string | null;
-  rationale: string;
-  alternatives: { label: string; reason: string }[];
-  signedAt: string | null;
-  supersedesId: string | null;
-  supersededById: string | null;
-  status: 'draft' | 'signed' | 'superseded';
-  decidedBy: { id: string; name: string };
-  createdAt: string;
-  targetSheetId: string | null;
-  targetSheet: (Record<string, unknown> & { name?: string }) | null;
-  check: SheetCheck | null;
-  failedLimits: string[];
-  justification: string;
-}
-
-/** What signing a design would record (POST …/decisions/check), for the confirmation dialog. */
-export type DecisionPreviewRow = Pick<DecisionRow, 'label' | 'design' | 'metrics' | 'targetSheetId' | 'targetSheet' | 'check' | 'failedLimits'> & {
-  metrics: DecisionRow['metrics'] & { basis?: string };
-};
+export type { CommentRow, DecisionPreviewRow, DecisionRow, FrozenPoint, Member } from '@shared/api/review.ts';
 
 export const useReviewStore = defineStore('review', () => {
   const studyId = ref<string | null>(null);
@@ -86,16 +38,20 @@ export const useReviewStore = defineStore('review', () => {
   const current = computed(() => decisions.value.find((d) => d.status === 'signed') ?? null);
   const reviewers = computed(() => members.value.filter((m) => m.role === 'reviewer'));
 
-  const base = () => `/api/studies/${studyId.value}`;
+  /** The open study (every call below but the sign-off search needs one). */
+  const sid = (): string => {
+    if (!studyId.value) throw new Error('no study is open');
+    return studyId.value;
+  };
 
   async function refreshReview(): Promise<void> {
-    review.value = await api.get<StudyReview>(`${base()}/review`);
+    review.value = await reviewApi.review(sid());
   }
   async function refreshDecisions(): Promise<void> {
-    decisions.value = await api.get<DecisionRow[]>(`${base()}/decisions`);
+    decisions.value = await reviewApi.decisions(sid());
   }
   async function refreshComments(): Promise<void> {
-    comments.value = await api.get<CommentRow[]>(`${base()}/comments`);
+    comments.value = await reviewApi.comments(sid());
   }
 
   async function load(id: string): Promise<void> {
@@ -109,32 +65,32 @@ export const useReviewStore = defineStore('review', () => {
     error.value = null;
     try {
       const [team] = await Promise.all([
-        api.get<{ members: Member[] }>('/api/team'),
+        teamApi.team(),
         refreshReview(),
         refreshDecisions(),
         refreshComments(),
       ]);
       members.value = team.members;
     } catch (err) {
-      error.value = errorText(err);
+      error.value = errorMessage(err);
     } finally {
       loading.value = false;
     }
   }
 
   async function addComment(input: CommentCreateInput): Promise<CommentRow> {
-    const row = await api.post<CommentRow>(`${base()}/comments`, input);
+    const row = await reviewApi.addComment(sid(), input);
     comments.value = [...comments.value, row];
     return row;
   }
 
   async function askReviewers(reviewerIds: string[], message: string): Promise<void> {
-    await api.post(`${base()}/review-requests`, { reviewerIds, message });
+    await reviewApi.askReviewers(sid(), reviewerIds, message);
     await refreshReview();
   }
 
   async function answer(requestId: string, state: ReviewVerdict, note: string): Promise<void> {
-    await api.post(`/api/review-requests/${requestId}/answer`, { state, note });
+    await reviewApi.answer(requestId, state, note);
     await refreshReview();
     // The header's count of open requests follows.
     void useReviewQueueStore().refresh();
@@ -142,26 +98,26 @@ export const useReviewStore = defineStore('review', () => {
 
   /** Named by study: the sign-off form searches before this store has loaded the study. */
   async function searchDesigns(forStudy: string, q: string, limit = 20): Promise<DesignSearchResult> {
-    return api.get<DesignSearchResult>(`/api/studies/${forStudy}/design-search?${new URLSearchParams({ q, limit: String(limit) })}`);
+    return reviewApi.searchDesigns(forStudy, q, limit);
   }
 
   async function checkDesign(forStudy: string, design: DecisionCreateInput['design'], label?: string): Promise<DecisionPreviewRow> {
-    return api.post<DecisionPreviewRow>(`/api/studies/${forStudy}/decisions/check`, { design, ...(label ? { label } : {}) });
+    return reviewApi.checkDesign(forStudy, design, label);
   }
 
   async function decide(input: DecisionCreateInput): Promise<DecisionRow> {
-    const row = await api.post<DecisionRow>(`${base()}/decisions`, input);
+    const row = await reviewApi.decide(sid(), input);
     await Promise.all([refreshDecisions(), refreshReview()]);
     return row;
   }
 
   async function signDraft(id: string): Promise<void> {
-    await api.patch(`/api/decisions/${id}`, { sign: true });
+    await reviewApi.sign(id);
     await Promise.all([refreshDecisions(), refreshReview()]);
   }
 
   async function deleteDraft(id: string): Promise<void> {
-    await api.delete(`/api/decisions/${id}`);
+    await reviewApi.deleteDraft(id);
     decisions.value = decisions.value.filter((d) => d.id !== id);
   }
 

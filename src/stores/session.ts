@@ -1,14 +1,14 @@
 /** The signed-in member: who they are, their team and role. Hydrated once by the router guard. */
 import { defineStore } from 'pinia';
 import { computed, ref } from 'vue';
-import { api, ApiRequestError, resetCsrfToken } from '@/api/client';
+import { resetCsrfToken } from '@/api/client';
+import { accountApi } from '@/api/account';
+import { authApi } from '@/api/auth';
+import { errorStatus } from '@/api/errors';
 
-export type TeamRole = 'admin' | 'engineer' | 'reviewer';
+import type { Me, TeamRole } from '@shared/api/account.ts';
 
-export interface Me {
-  user: { id: string; email: string; name: string; role: TeamRole };
-  team: { id: string; name: string };
-}
+export type { Me, TeamRole } from '@shared/api/account.ts';
 
 /** Same rule as the server (server/auth/password.ts); the server has the last word. */
 export const PASSWORD_MIN_LENGTH = 10;
@@ -24,9 +24,9 @@ export const useSessionStore = defineStore('session', () => {
   /** Asks the server who we are; a 401 simply means signed out. */
   async function hydrate(): Promise<void> {
     try {
-      me.value = await api.get<Me>('/api/me');
+      me.value = await authApi.me();
     } catch (err) {
-      if (!(err instanceof ApiRequestError && err.status === 401)) throw err;
+      if (errorStatus(err) !== 401) throw err;
       me.value = null;
     } finally {
       hydrated.value = true;
@@ -48,18 +48,34 @@ export const useSessionStore = defineStore('session', () => {
   }
 
   async function signIn(email: string, password: string): Promise<Me> {
-    const next = await api.post<Me>('/api/auth/login', { email, password });
+    const next = await authApi.login(email, password);
     adopt(next);
     return next;
   }
 
   async function signOut(): Promise<void> {
     try {
-      await api.post('/api/auth/logout');
+      await authApi.logout();
     } finally {
       dehydrate();
     }
   }
 
-  return { me, hydrated, signedIn, role, isAdmin, hydrate, dehydrate, adopt, signIn, signOut };
+  /** Accepting an invitation signs the new member in. */
+  async function acceptInvitation(token: string, name: string, password: string): Promise<void> {
+    adopt(await authApi.acceptInvitation(token, { name, password }));
+  }
+
+  async function saveName(name: string): Promise<void> {
+    me.value = await accountApi.saveProfile(name);
+  }
+
+  return {
+    me, hydrated, signedIn, role, isAdmin, hydrate, dehydrate, adopt, signIn, signOut, acceptInvitation, saveName,
+    changePassword: accountApi.changePassword,
+    requestPasswordReset: async (email: string) => (await authApi.requestPasswordReset(email)).message,
+    passwordResetEmail: async (token: string) => (await authApi.passwordResetEmail(token)).email,
+    resetPassword: authApi.resetPassword,
+    invitation: authApi.invitation,
+  };
 });

@@ -4,34 +4,22 @@
  */
 import { defineStore } from 'pinia';
 import { computed, ref } from 'vue';
-import { api, ApiRequestError } from '@/api/client';
+import { api } from '@/api/client';
+import { ApiRequestError, errorMessage } from '@/api/errors';
 import type { StudyCreate, StudyExport, StudyListItem } from '@shared/schemas/study.ts';
 import type { TargetPreset, TargetSheet } from '@shared/targets/index.ts';
+import type { TargetSheetState } from '@shared/api/studies.ts';
 
 export interface StudyRow extends StudyListItem {
   canEdit?: boolean;
 }
 
-export interface TargetSheetState {
-  /** null only for the default of a study with no saved sheet. */
-  id: string | null;
-  studyId: string;
-  position: number;
-  preset: string | null;
-  presetName: string | null;
-  sheet: TargetSheet;
-  updatedAt: string | null;
-}
+export type { TargetSheetState } from '@shared/api/studies.ts';
 
 export interface ImportOutcome {
   study: { id: string; name: string };
   candidateCount: number;
   sweeps: { name: string }[];
-}
-
-/** The message to show for a failure; every caller shows server messages as they come ("field: rule"). */
-export function errorText(err: unknown): string {
-  return err instanceof ApiRequestError || err instanceof Error ? err.message : String(err);
 }
 
 export const useStudiesStore = defineStore('studies', () => {
@@ -55,7 +43,7 @@ export const useStudiesStore = defineStore('studies', () => {
       list.value = await api.get<StudyRow[]>(`/api/studies${showArchived.value ? '?archived=true' : ''}`);
       loaded.value = true;
     } catch (err) {
-      error.value = errorText(err);
+      error.value = errorMessage(err);
     } finally {
       loading.value = false;
     }

@@ -4,12 +4,13 @@
  */
 import { defineStore } from 'pinia';
 import { ref } from 'vue';
-import { api, ApiRequestError } from '@/api/client';
-import type { SweepConstraints, SweepGridInput } from '@shared/sweep/grid-schema.ts';
-import type { CandidateDesign } from '@/components/sweep/sweep-form';
+import { errorMessage } from '@/api/errors';
+import { candidatesApi } from '@/api/candidates';
+import { sweepsApi, type SweepStart } from '@/api/sweeps';
+import type { CandidateDesign, SweepCreated, SweepProgress, SweepStatus } from '@shared/api/sweeps.ts';
 import { useCandidatesStore } from '@/stores/candidates';
 
-export type SweepStatus = 'queued' | 'running' | 'done' | 'failed' | 'cancelled';
+export type { SweepProgress, SweepStatus } from '@shared/api/sweeps.ts';
 
 export interface CandidateSummary {
   id: string;
@@ -19,38 +20,14 @@ export interface CandidateSummary {
   targetSheetId?: string | null;
 }
 
-export interface SweepSummary {
-  id: string;
-  name: string;
-  status: SweepStatus;
-  pointsTotal: number;
-  pointsDone: number;
-  pointsFailed?: number;
-  createdAt?: string;
-  finishedAt?: string | null;
-  /** The study's target sheet that judges its designs; null: the study's first. */
-  targetSheetId?: string | null;
-}
-
-/** One progress message of GET /api/sweeps/:id/events. */
-export interface SweepProgress {
-  status: SweepStatus;
-  pointsDone: number;
-  pointsTotal: number;
-  /** Points per second since the sweep started. */
-  ratePerSecond: number | null;
-  etaSeconds: number | null;
-}
+/**
+ * A sweep in the list: what the server answers, or (just after starting one, before the list is read again) the
+ * fields the client knows.
+ */
+export type SweepSummary = Pick<SweepProgress, 'id' | 'name' | 'status' | 'pointsTotal' | 'pointsDone' | 'createdAt' | 'targetSheetId'> &
+  Partial<SweepProgress>;
 
 export const FINAL_STATUSES: readonly SweepStatus[] = ['done', 'failed', 'cancelled'];
-
-/** Lists come back bare or wrapped ({ items } / { sweeps }); accept each so a small server change does not blank the page. */
-function listOf<T>(body: unknown, key: string): T[] {
-  if (Array.isArray(body)) return body as T[];
-  const o = body as Record<string, unknown> | null;
-  const inner = o?.[key] ?? o?.items;
-  return Array.isArray(inner) ? (inner as T[]) : [];
-}
 
 export const useSweepsStore = defineStore('sweeps', () => {
   const studyId = ref<string | null>(null);
@@ -66,14 +43,11 @@ export const useSweepsStore = defineStore('sweeps', () => {
     try {
       // An edit saved as the Candidates tab closed must land before we read the candidates back.
       await useCandidatesStore().settled();
-      const [c, s] = await Promise.all([
-        api.get<unknown>(`/api/studies/${encodeURIComponent(id)}/candidates`),
-        api.get<unknown>(`/api/studies/${encodeURIComponent(id)}/sweeps`),
-      ]);
-      candidates.value = listOf<CandidateSummary>(c, 'candidates');
-      sweeps.value = listOf<SweepSummary>(s, 'sweeps');
+      const [c, s] = await Promise.all([candidatesApi.list(id), sweepsApi.list(id)]);
+      candidates.value = c as CandidateSummary[];
+      sweeps.value = s;
     } catch (e) {
-      error.value = e instanceof ApiRequestError ? e.message : String(e);
+      error.value = errorMessage(e);
     } finally {
       loading.value = false;
     }
@@ -81,13 +55,13 @@ export const useSweepsStore = defineStore('sweeps', () => {
 
   async function refreshSweeps(): Promise<void> {
     if (!studyId.value) return;
-    sweeps.value = listOf<SweepSummary>(await api.get<unknown>(`/api/studies/${encodeURIComponent(studyId.value)}/sweeps`), 'sweeps');
+    sweeps.value = await sweepsApi.list(studyId.value);
   }
 
-  /** Starts a sweep; the caller shows ApiRequestError.fields beside the form's fields. */
-  async function start(body: { name: string; grid: SweepGridInput; constraints?: SweepConstraints; targetSheetId?: string | null }): Promise<{ id: string; pointsTotal: number }> {
+  /** Starts a sweep; the caller shows formFailure(err).fields beside the form's fields. */
+  async function start(body: SweepStart): Promise<SweepCreated> {
     if (!studyId.value) throw new Error('no study open');
-    const created = await api.post<{ id: string; pointsTotal: number }>(`/api/studies/${encodeURIComponent(studyId.value)}/sweeps`, body);
+    const created = await sweepsApi.start(studyId.value, body);
     sweeps.value = [
       { id: created.id, name: body.name, status: 'queued', pointsTotal: created.pointsTotal, pointsDone: 0, createdAt: new Date().toISOString(), targetSheetId: body.targetSheetId ?? null },
       ...sweeps.value,
@@ -96,7 +70,7 @@ export const useSweepsStore = defineStore('sweeps', () => {
   }
 
   async function cancel(id: string): Promise<void> {
-    await api.post(`/api/sweeps/${encodeURIComponent(id)}/cancel`);
+    await sweepsApi.cancel(id);
     applyProgress(id, { status: 'cancelled' });
   }
 
@@ -109,9 +83,7 @@ export const useSweepsStore = defineStore('sweeps', () => {
     );
   }
 
-  function eventsUrl(id: string): string {
-    return `/api/sweeps/${encodeURIComponent(id)}/events`;
-  }
+  const eventsUrl = (id: string): string => sweepsApi.eventsUrl(id);
 
   return { studyId, candidates, sweeps, loading, error, load, refreshSweeps, start, cancel, applyProgress, eventsUrl };
 });

@@ -138,6 +138,7 @@ const QUERIES: Record<string, string[]> = {
   'GET /api/studies': ['archived=maybe', 'archived=1'],
   'GET /api/sweeps/:id/designs': results,
   'GET /api/sweeps/:id/results': results,
+  'GET /api/sweeps/:id/steer-span': ['zz=1', 'offset=0'],
   // Over-long beams: 15,000 characters, as Node refuses request lines over 16 KiB before the app sees them.
   'GET /api/candidates/:id/codes.csv': ['beams=', `beams=${'9:'.repeat(7_500)}`, 'beams=-30:30:15&threshold=NaN', 'beams=-30:30:15&threshold=1e999',
     'beams=-30:30:15&threshold=-1', 'beams=-30:30:15&calibration=zz'],

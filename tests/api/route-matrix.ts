@@ -284,6 +284,7 @@ export const matrix: MatrixRow[] = [
   { method: 'GET', path: '/api/sweeps/:id/results', params: { id: 'sweepId' }, ...member(200), otherTeam: 404 },
   { method: 'GET', path: '/api/sweeps/:id/designs', params: { id: 'sweepId' }, ...member(200), otherTeam: 404 },
   { method: 'GET', path: '/api/sweeps/:id/results.csv', params: { id: 'sweepId' }, ...member(200), otherTeam: 404 },
+  { method: 'GET', path: '/api/sweeps/:id/steer-span', params: { id: 'sweepId' }, ...member(200), otherTeam: 404 },
 
   // review and sign-off: the fixture study holds one signed decision, one open request to team A's reviewer, one comment
   { method: 'GET', path: '/api/studies/:id/review', params: { id: 'studyId' }, ...member(200), otherTeam: 404 },

@@ -121,6 +121,16 @@ describe('a small sweep through the API', () => {
     expect(json.body.total).toBe(2);
   });
 
+  it('answers the steering span of the stored points in one request', async () => {
+    // The grid above steers az 0 and 30 at the default elevation 0 (SMALL_GRID).
+    const res = await engineer.get(`/api/sweeps/${sweepId}/steer-span`);
+    expect(res.status).toBe(200);
+    expect(res.body).toEqual({ span: { azMinDeg: 0, azMaxDeg: 30, elMinDeg: 0, elMaxDeg: 0 } });
+    const bad = await engineer.get(`/api/sweeps/${sweepId}/steer-span?zz=1`);
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.message).toMatch(/zz/);
+  });
+
   it('refuses unknown sort and filter fields with a 400 naming them', async () => {
     const bad = await engineer.get(`/api/sweeps/${sweepId}/results?sort=color:asc`);
     expect(bad.status).toBe(400);

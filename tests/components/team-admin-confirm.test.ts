@@ -4,23 +4,18 @@ import { createPinia, setActivePinia } from 'pinia';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { stubMatchMedia } from '../helpers/jsdom.ts';
 
-const patch = vi.fn(async () => ({}));
-vi.mock('@/api/client', () => ({
-  ApiRequestError: class extends Error {},
-  api: {
-    get: vi.fn(async (url: string) => {
-      if (url === '/api/team') {
-        return { team: { name: 'Invented Radio Co' }, members: [
-          { id: 'u1', email: 'ada@example.test', name: 'Ada Admin', role: 'admin' },
-          { id: 'u2', email: 'bo@example.test', name: 'Bo Reviewer', role: 'reviewer' },
-        ] };
-      }
-      if (url === '/api/team/invitations') return [];
-      throw new Error(`unexpected GET ${url}`);
-    }),
-    patch: (...a: unknown[]) => patch(...(a as [])),
-    post: vi.fn(),
-    delete: vi.fn(),
+const setRole = vi.fn(async () => undefined);
+vi.mock('@/api/team', () => ({
+  teamApi: {
+    team: vi.fn(async () => ({ team: { name: 'Invented Radio Co' }, members: [
+      { id: 'u1', email: 'ada@example.test', name: 'Ada Admin', role: 'admin' },
+      { id: 'u2', email: 'bo@example.test', name: 'Bo Reviewer', role: 'reviewer' },
+    ] })),
+    invitations: vi.fn(async () => []),
+    setRole: (...a: unknown[]) => setRole(...(a as [])),
+    invite: vi.fn(),
+    removeMember: vi.fn(),
+    revokeInvitation: vi.fn(),
   },
 }));
 
@@ -29,7 +24,7 @@ vi.setConfig({ testTimeout: 90_000 });
 beforeEach(() => {
   stubMatchMedia();
   setActivePinia(createPinia());
-  patch.mockClear();
+  setRole.mockClear();
   document.body.innerHTML = '';
 });
 
@@ -55,10 +50,10 @@ describe('promoting a member to admin', () => {
     const w = await mountTeam();
     roleSelect(w).vm.$emit('change', 'admin');
     await vi.waitFor(() => expect(document.body.textContent).toContain('Make Bo Reviewer an admin?'), { timeout: 20_000 });
-    expect(patch).not.toHaveBeenCalled();
+    expect(setRole).not.toHaveBeenCalled();
     const ok = [...document.querySelectorAll('.ant-modal button')].find((b) => b.textContent?.includes('Make admin')) as HTMLElement;
     ok.click();
-    await vi.waitFor(() => expect(patch).toHaveBeenCalledWith('/api/team/members/u2', { role: 'admin' }), { timeout: 20_000 });
+    await vi.waitFor(() => expect(setRole).toHaveBeenCalledWith('u2', 'admin'), { timeout: 20_000 });
     w.unmount();
   });
 
@@ -66,7 +61,7 @@ describe('promoting a member to admin', () => {
     const w = await mountTeam();
     roleSelect(w).vm.$emit('change', 'engineer');
     await flushPromises();
-    expect(patch).toHaveBeenCalledWith('/api/team/members/u2', { role: 'engineer' });
+    expect(setRole).toHaveBeenCalledWith('u2', 'engineer');
     w.unmount();
   });
 });

@@ -83,22 +83,8 @@ export interface SweepFormState {
   constraints: { maxApertureXMm: number | null; maxApertureYMm: number | null; maxChannels: number | null; minChannels: number | null };
 }
 
-/** A candidate's design as the builder reads it (a resolved engine design; extra fields are ignored). */
-export interface CandidateDesign {
-  frequencyGHz: number;
-  nx: number;
-  ny?: number;
-  dxMm: number;
-  dyMm?: number;
-  taperX?: Taper;
-  taperY?: Taper;
-  phaseBits?: number | null;
-  grouping?: 'element' | 'column' | 'row';
-  element?: Element;
-  channelPowerDbm?: number | null;
-  steerAzDeg?: number;
-  steerElDeg?: number;
-}
+export type { CandidateDesign } from '@shared/api/sweeps.ts';
+import type { CandidateDesign } from '@shared/api/sweeps.ts';
 
 const fixed = (v: number | null): NumberFieldState => ({ mode: 'fixed', fixed: v, start: v, stop: v, step: null, list: v === null ? '' : String(v) });
 

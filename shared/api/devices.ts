@@ -1,0 +1,23 @@
+/** Response shapes of the device routes (server/routes/devices.ts). */
+import type { DeviceLayout } from '../schemas/device.ts';
+import type { DeviceSweepRow } from '../devices/device-sweep.ts';
+
+/** A device as GET/POST /api/studies/:id/devices and GET/PATCH /api/devices/:id return it. */
+export interface DeviceRow {
+  id: string;
+  studyId: string;
+  name: string;
+  targetSheetId: string | null;
+  layout: DeviceLayout;
+  notes: string;
+  position: number;
+  createdAt: string;
+  updatedAt: string;
+}
+
+/** POST /api/devices/:id/sweep. */
+export interface DeviceSweepAnswer {
+  region: 'sphere' | 'sector';
+  sheetName: string | null;
+  rows: DeviceSweepRow[];
+}
