@@ -18,8 +18,11 @@ const decide = (client: AuthedClient, body: Record<string, unknown>, sid = study
 
 describe('POST /api/studies/:id/decisions', () => {
   it('lets a reviewer sign off, freezing the design, the engine metrics and the engine version', async () => {
+    // A sheet with only a scan range: the decision is then judged at every steering angle over it.
+    const sheet = await api.engineer.post(`/api/studies/${studyId}/target-sheets`).send({ preset: null, sheet: { name: 'Edge scan', scanAzDeg: { min: -30, max: 30 } } });
+    expect(sheet.status, JSON.stringify(sheet.body)).toBe(201);
     const res = await decide(api.reviewer, { label: 'Edge module B', alternatives: [{ label: '12 × 1 uniform', reason: 'too wide for the edge' }] });
-    expect(res.status).toBe(201);
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
     const d = res.body;
     expect(d.status).toBe('signed');
     expect(d.signedAt).toEqual(expect.any(String));
@@ -32,6 +35,7 @@ describe('POST /api/studies/:id/decisions', () => {
     expect(d.design).toEqual(parsed);
     expect(d.metrics.at).toEqual(JSON.parse(JSON.stringify(evaluateDesign(parsed))));
     expect(d.metrics.points.length).toBeGreaterThan(1);
+    expect(d.targetSheetId).toBe(sheet.body.id);
     const steers = d.metrics.points.map((p: { steerAzDeg: number }) => p.steerAzDeg);
     expect(new Set(steers).size).toBe(steers.length);
     const audited = await api.ctx.db.getRepository(AuditEvent).findOneBy({ action: 'decision.signed', targetId: d.id });
