@@ -15,3 +15,6 @@ export const authApi = {
   invitation: (token: string) => api.get<InvitationInfo>(invitation(token)),
   acceptInvitation: (token: string, body: { name: string; password: string }) => api.post<Me>(`${invitation(token)}/accept`, body),
 };
+
+/** The session changed (sign-in, sign-out, invitation accepted): the next state-changing request fetches a new token. */
+export { resetCsrfToken } from './client';

@@ -4,46 +4,17 @@
  */
 import { defineStore } from 'pinia';
 import { ref } from 'vue';
-import { api } from '@/api/client';
+import { benchApi } from '@/api/bench';
+import type { CalibrationView, SquintView, UploadDetail, UploadSet } from '@shared/api/bench.ts';
 import type { CodesTable } from '@shared/bench/codes-table.ts';
 import type { Calibration } from '@shared/bench/calibration.ts';
 import type { ManualCodesResult } from '@shared/bench/manual-codes.ts';
-import type { SquintResult } from '@shared/bench/beam-squint.ts';
 import type { MonteCarloSummary } from '@shared/bench/monte-carlo-summary.ts';
 import type { MonteCarloOptionsInput } from '@shared/bench/monte-carlo-schema.ts';
-import type { CutAnalysis } from '@shared/bench/analyse-cut.ts';
-import type { MeasurementAnalysis } from '@shared/bench/analyse-measurement.ts';
-import type { RangeData } from '@shared/bench/parse-range-csv.ts';
 import type { Beam } from '@shared/bench/beam.ts';
 import { errorMessage } from '@/api/errors';
 
-export interface CalibrationView {
-  candidateId: string;
-  offsets: Calibration;
-  sourceFilename: string | null;
-  updatedAt: string | null;
-}
-
-export interface UploadSummary {
-  id: string;
-  candidateId: string;
-  beam: Beam & { codes: number[] };
-  setName: string;
-  originalFilename: string;
-  createdAt: string;
-  cuts: { plane: 'az' | 'el'; name: string; measured: CutAnalysis; model: CutAnalysis; difference: { peakDeg: number; hpbwDeg: number; sllDb: number | null } }[];
-}
-export interface UploadDetail extends UploadSummary {
-  parsed: RangeData;
-  analysis: MeasurementAnalysis;
-}
-export interface UploadSet {
-  setName: string;
-  candidateId: string;
-  uploads: UploadSummary[];
-}
-
-export type SquintView = SquintResult & { band: { id: string | null; lowGHz: number; highGHz: number; source: string | null } };
+export type { CalibrationView, SquintView, UploadDetail, UploadSet, UploadSummary } from '@shared/api/bench.ts';
 
 export const useBenchStore = defineStore('bench', () => {
   const candidateId = ref<string | null>(null);
@@ -79,58 +50,62 @@ export const useBenchStore = defineStore('bench', () => {
       monteCarlo.value = null;
     }
     candidateId.value = id;
-    calibration.value = await call(() => api.get<CalibrationView>(`/api/candidates/${id}/calibration`));
+    calibration.value = await call(() => benchApi.calibration(id));
   }
 
-  const path = (tail: string) => `/api/candidates/${candidateId.value}/${tail}`;
+  /** The candidate every call below works on (selectCandidate first). */
+  const cid = (): string => {
+    if (!candidateId.value) throw new Error('no candidate is selected');
+    return candidateId.value;
+  };
 
   async function loadCodes(beams: string | Beam[], pointingThresholdDeg: number | null, useCalibration: boolean): Promise<void> {
-    table.value = await call(() => api.post<CodesTable>(path('codes'), { beams, pointingThresholdDeg, calibration: useCalibration ? 'stored' : 'none' }));
+    table.value = await call(() => benchApi.codes(cid(), { beams, pointingThresholdDeg, calibration: useCalibration ? 'stored' : 'none' }));
   }
 
   function csvUrl(beams: string, thresholdDeg: number | null, useCalibration: boolean): string {
     const q = new URLSearchParams({ beams, calibration: useCalibration ? 'stored' : 'none' });
     if (thresholdDeg !== null) q.set('threshold', String(thresholdDeg));
-    return `${path('codes.csv')}?${q.toString()}`;
+    return benchApi.codesCsvUrl(String(candidateId.value), q);
   }
 
   async function saveCalibration(offsets: Calibration | File): Promise<void> {
     const body = offsets instanceof File ? formWith({ file: offsets }) : { offsets };
-    calibration.value = await call(() => api.put<CalibrationView>(path('calibration'), body));
+    calibration.value = await call(() => benchApi.saveCalibration(cid(), body));
   }
 
   async function runManual(codes: number[], useCalibration: boolean): Promise<void> {
-    manual.value = await call(() => api.post<ManualCodesResult>(path('manual-codes'), { codes, calibration: useCalibration ? 'stored' : 'none' }));
+    manual.value = await call(() => benchApi.manualCodes(cid(), { codes, calibration: useCalibration ? 'stored' : 'none' }));
   }
 
   async function loadSets(studyId: string): Promise<void> {
-    sets.value = (await call(() => api.get<{ sets: UploadSet[] }>(`/api/studies/${studyId}/range-data`))).sets;
+    sets.value = (await call(() => benchApi.rangeSets(studyId))).sets;
   }
 
   async function upload(studyId: string, file: File, fields: { azDeg: number; elDeg: number; codes: string; setName: string }): Promise<UploadDetail> {
     const form = formWith({ file, azDeg: String(fields.azDeg), elDeg: String(fields.elDeg), codes: fields.codes, setName: fields.setName });
-    const made = await call(() => api.post<UploadDetail>(path('range-data'), form));
+    const made = await call(() => benchApi.upload(cid(), form));
     detail.value = made;
     await loadSets(studyId);
     return made;
   }
 
   async function openUpload(id: string): Promise<void> {
-    detail.value = await call(() => api.get<UploadDetail>(`/api/range-data/${id}`));
+    detail.value = await call(() => benchApi.uploadDetail(id));
   }
 
   async function removeUpload(studyId: string, id: string): Promise<void> {
-    await call(() => api.delete(`/api/range-data/${id}`));
+    await call(() => benchApi.removeUpload(id));
     if (detail.value?.id === id) detail.value = null;
     await loadSets(studyId);
   }
 
   async function runSquint(beam: Beam, band: string | { lowGHz: number; highGHz: number }, points: number): Promise<void> {
-    squint.value = await call(() => api.post<SquintView>(path('squint'), { beam, band, points }));
+    squint.value = await call(() => benchApi.squint(cid(), { beam, band, points }));
   }
 
   async function runMonteCarlo(options: MonteCarloOptionsInput): Promise<void> {
-    monteCarlo.value = await call(() => api.post<MonteCarloSummary>(path('monte-carlo'), options));
+    monteCarlo.value = await call(() => benchApi.monteCarlo(cid(), options));
   }
 
   return { candidateId, table, calibration, manual, sets, detail, squint, monteCarlo, busy, error, selectCandidate, loadCodes, csvUrl, saveCalibration, runManual, loadSets, upload, openUpload, removeUpload, runSquint, runMonteCarlo };

@@ -4,23 +4,13 @@
  */
 import { defineStore } from 'pinia';
 import { ref, shallowRef } from 'vue';
-import { api } from '@/api/client';
+import { elementPatternsApi } from '@/api/element-patterns';
+import type { PatternSummary } from '@shared/api/element-patterns.ts';
 import type { DesignInput } from '@shared/schemas/design.ts';
 import type { ElementPattern } from '@shared/schemas/element-pattern.ts';
 import { errorMessage } from '@/api/errors';
 
-export interface PatternSummary {
-  id: string;
-  studyId: string;
-  name: string;
-  originalFilename: string;
-  createdAt: string;
-  azStepDeg: number;
-  elStepDeg: number;
-  azRangeDeg: [number, number];
-  elRangeDeg: [number, number];
-  peakGainDbi: number;
-}
+export type { PatternSummary } from '@shared/api/element-patterns.ts';
 
 export const useElementPatternsStore = defineStore('elementPatterns', () => {
   const studyId = ref<string | null>(null);
@@ -34,7 +24,7 @@ export const useElementPatternsStore = defineStore('elementPatterns', () => {
     if (studyId.value !== id) grids.value = new Map();
     studyId.value = id;
     try {
-      list.value = (await api.get<{ patterns: PatternSummary[] }>(`/api/studies/${id}/element-patterns`)).patterns;
+      list.value = await elementPatternsApi.list(id);
       error.value = null;
     } catch (err) {
       error.value = errorMessage(err);
@@ -44,7 +34,7 @@ export const useElementPatternsStore = defineStore('elementPatterns', () => {
   async function grid(id: string): Promise<ElementPattern> {
     const hit = grids.value.get(id);
     if (hit) return hit;
-    const got = (await api.get<{ pattern: ElementPattern }>(`/api/element-patterns/${id}`)).pattern;
+    const got = await elementPatternsApi.pattern(id);
     grids.value = new Map(grids.value).set(id, got);
     return got;
   }
@@ -67,7 +57,7 @@ export const useElementPatternsStore = defineStore('elementPatterns', () => {
     if (name.trim() !== '') form.append('name', name.trim());
     busy.value = true;
     try {
-      const made = await api.post<PatternSummary & { pattern: ElementPattern }>(`/api/studies/${studyId.value}/element-patterns`, form);
+      const made = await elementPatternsApi.upload(studyId.value, form);
       grids.value = new Map(grids.value).set(made.id, made.pattern);
       await load(studyId.value);
       error.value = null;
@@ -82,7 +72,7 @@ export const useElementPatternsStore = defineStore('elementPatterns', () => {
 
   async function remove(id: string): Promise<void> {
     try {
-      await api.delete(`/api/element-patterns/${id}`);
+      await elementPatternsApi.remove(id);
       if (studyId.value) await load(studyId.value);
     } catch (err) {
       error.value = errorMessage(err);

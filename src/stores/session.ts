@@ -1,9 +1,8 @@
 /** The signed-in member: who they are, their team and role. Hydrated once by the router guard. */
 import { defineStore } from 'pinia';
 import { computed, ref } from 'vue';
-import { resetCsrfToken } from '@/api/client';
 import { accountApi } from '@/api/account';
-import { authApi } from '@/api/auth';
+import { authApi, resetCsrfToken } from '@/api/auth';
 import { errorStatus } from '@/api/errors';
 
 import type { Me, TeamRole } from '@shared/api/account.ts';

@@ -4,23 +4,13 @@
  */
 import { defineStore } from 'pinia';
 import { computed, ref } from 'vue';
-import { api } from '@/api/client';
+import { studiesApi } from '@/api/studies';
 import { ApiRequestError, errorMessage } from '@/api/errors';
-import type { StudyCreate, StudyExport, StudyListItem } from '@shared/schemas/study.ts';
+import type { StudyCreate } from '@shared/schemas/study.ts';
 import type { TargetPreset, TargetSheet } from '@shared/targets/index.ts';
-import type { TargetSheetState } from '@shared/api/studies.ts';
+import type { ImportOutcome, StudyRow, TargetSheetState } from '@shared/api/studies.ts';
 
-export interface StudyRow extends StudyListItem {
-  canEdit?: boolean;
-}
-
-export type { TargetSheetState } from '@shared/api/studies.ts';
-
-export interface ImportOutcome {
-  study: { id: string; name: string };
-  candidateCount: number;
-  sweeps: { name: string }[];
-}
+export type { ImportOutcome, StudyRow, TargetSheetState } from '@shared/api/studies.ts';
 
 export const useStudiesStore = defineStore('studies', () => {
   const list = ref<StudyRow[]>([]);
@@ -40,7 +30,7 @@ export const useStudiesStore = defineStore('studies', () => {
     loading.value = true;
     error.value = null;
     try {
-      list.value = await api.get<StudyRow[]>(`/api/studies${showArchived.value ? '?archived=true' : ''}`);
+      list.value = await studiesApi.list(showArchived.value);
       loaded.value = true;
     } catch (err) {
       error.value = errorMessage(err);
@@ -50,7 +40,7 @@ export const useStudiesStore = defineStore('studies', () => {
   }
 
   async function create(input: Partial<StudyCreate> & { name: string }): Promise<StudyRow> {
-    const created = await api.post<StudyRow>('/api/studies', input);
+    const created = await studiesApi.create(input);
     await fetchList();
     return list.value.find((s) => s.id === created.id) ?? created;
   }
@@ -64,7 +54,7 @@ export const useStudiesStore = defineStore('studies', () => {
       if (change.archived !== undefined) row.archivedAt = change.archived ? new Date().toISOString() : null;
     }
     try {
-      const saved = await api.patch<{ updatedAt: string; archivedAt: string | null; name: string }>(`/api/studies/${id}`, change);
+      const saved = await studiesApi.patch(id, change);
       if (row) Object.assign(row, { name: saved.name, archivedAt: saved.archivedAt, updatedAt: saved.updatedAt });
       if (current.value?.id === id) Object.assign(current.value, { name: saved.name, archivedAt: saved.archivedAt });
     } catch (err) {
@@ -74,7 +64,7 @@ export const useStudiesStore = defineStore('studies', () => {
   }
 
   async function duplicate(id: string): Promise<void> {
-    await api.post(`/api/studies/${id}/duplicate`);
+    await studiesApi.duplicate(id);
     await fetchList();
   }
 
@@ -82,7 +72,7 @@ export const useStudiesStore = defineStore('studies', () => {
     const index = list.value.findIndex((s) => s.id === id);
     const removed = index >= 0 ? list.value.splice(index, 1)[0] : undefined;
     try {
-      await api.delete(`/api/studies/${id}`);
+      await studiesApi.remove(id);
     } catch (err) {
       if (removed) list.value.splice(index, 0, removed);
       throw err;
@@ -90,7 +80,7 @@ export const useStudiesStore = defineStore('studies', () => {
   }
 
   async function exportFile(id: string): Promise<{ fileName: string; text: string }> {
-    const file = await api.get<StudyExport>(`/api/studies/${id}/export`);
+    const file = await studiesApi.exportFile(id);
     const base = file.study.name.replace(/[^\w.-]+/g, '-').replace(/^-+|-+$/g, '') || 'study';
     return { fileName: `${base}.lobewise.json`, text: JSON.stringify(file, null, 2) };
   }
@@ -103,7 +93,7 @@ export const useStudiesStore = defineStore('studies', () => {
     } catch {
       throw new ApiRequestError(400, 'invalid_json', 'file: is not valid JSON', [{ field: 'file', message: 'is not valid JSON' }]);
     }
-    const outcome = await api.post<ImportOutcome>('/api/studies/import', body);
+    const outcome = await studiesApi.importFile(body);
     await fetchList();
     return outcome;
   }
@@ -114,39 +104,39 @@ export const useStudiesStore = defineStore('studies', () => {
       targetSheet.value = null;
       targetSheets.value = [];
     }
-    current.value = await api.get<StudyRow>(`/api/studies/${id}`);
+    current.value = await studiesApi.get(id);
   }
 
   async function loadTargetSheet(studyId: string): Promise<TargetSheetState> {
-    targetSheet.value = await api.get<TargetSheetState>(`/api/studies/${studyId}/target-sheet`);
+    targetSheet.value = await studiesApi.targetSheet(studyId);
     return targetSheet.value;
   }
 
   async function saveTargetSheet(studyId: string, preset: string | null, sheet: TargetSheet): Promise<TargetSheetState> {
-    targetSheet.value = await api.put<TargetSheetState>(`/api/studies/${studyId}/target-sheet`, { preset, sheet });
+    targetSheet.value = await studiesApi.saveTargetSheet(studyId, preset, sheet);
     return targetSheet.value;
   }
 
   async function loadTargetSheets(studyId: string): Promise<TargetSheetState[]> {
-    targetSheets.value = await api.get<TargetSheetState[]>(`/api/studies/${studyId}/target-sheets`);
+    targetSheets.value = await studiesApi.targetSheets(studyId);
     targetSheet.value = targetSheets.value[0] ?? targetSheet.value;
     return targetSheets.value;
   }
 
   async function addTargetSheet(studyId: string, preset: string | null, sheet: TargetSheet): Promise<TargetSheetState> {
-    const created = await api.post<TargetSheetState>(`/api/studies/${studyId}/target-sheets`, { preset, sheet });
+    const created = await studiesApi.addTargetSheet(studyId, preset, sheet);
     await loadTargetSheets(studyId);
     return created;
   }
 
   async function saveTargetSheetById(studyId: string, sheetId: string, preset: string | null, sheet: TargetSheet): Promise<TargetSheetState> {
-    const saved = await api.put<TargetSheetState>(`/api/studies/${studyId}/target-sheets/${sheetId}`, { preset, sheet });
+    const saved = await studiesApi.saveTargetSheetById(studyId, sheetId, preset, sheet);
     await loadTargetSheets(studyId);
     return saved;
   }
 
   async function removeTargetSheet(studyId: string, sheetId: string): Promise<void> {
-    await api.delete(`/api/studies/${studyId}/target-sheets/${sheetId}`);
+    await studiesApi.removeTargetSheet(studyId, sheetId);
     await loadTargetSheets(studyId);
     if (targetSheets.value.length === 0) await loadTargetSheet(studyId);
   }
@@ -157,7 +147,7 @@ export const useStudiesStore = defineStore('studies', () => {
   }
 
   async function loadPresets(): Promise<TargetPreset[]> {
-    if (presets.value.length === 0) presets.value = await api.get<TargetPreset[]>('/api/target-presets');
+    if (presets.value.length === 0) presets.value = await studiesApi.presets();
     return presets.value;
   }
 

@@ -1,7 +1,7 @@
 /** Part of the trade store: the study's sweeps, which one is open, and the target sheet that judges it. */
 import { ref } from 'vue';
 import { sweepsApi } from '@/api/sweeps';
-import { targetSheetsApi } from '@/api/target-sheets';
+import { studiesApi } from '@/api/studies';
 import type { TargetSheetState } from '@shared/api/studies.ts';
 import { LIMIT_KEYS, type TargetSheet } from '@shared/targets/sheet.ts';
 import type { SweepSummary } from '@/stores/sweeps';
@@ -23,7 +23,7 @@ export function useSweepChoice() {
   /** Reads the study's sweeps and sheets (a study whose sheets cannot be read is judged by none). */
   async function loadStudy(id: string): Promise<void> {
     studyId.value = id;
-    const [list, ts] = await Promise.all([sweepsApi.list(id), targetSheetsApi.list(id).catch(() => [] as TargetSheetState[])]);
+    const [list, ts] = await Promise.all([sweepsApi.list(id), studiesApi.targetSheets(id).catch(() => [] as TargetSheetState[])]);
     sweeps.value = list;
     studySheets = ts;
     useSheetOf(null);
