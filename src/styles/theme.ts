@@ -18,6 +18,9 @@ export const theme: ThemeConfig = {
     colorPrimary: palette.teal,
     colorInfo: palette.teal,
     colorSuccess: '#1f6e44',
+    // Set, not derived: the palette derived from this deeper green gives success tags a grey-green background (2.7:1).
+    colorSuccessBg: '#e8f3ec',
+    colorSuccessBorder: '#a7d3b8',
     colorError: '#b0452c',
     colorWarning: '#b7791f',
     colorBgLayout: palette.paper,

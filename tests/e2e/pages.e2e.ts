@@ -1,6 +1,10 @@
-/** Every page of the app opens without console errors, with a screenshot of each in screenshots/. */
+/**
+ * Every page of the app opens without console errors and without serious or critical accessibility violations
+ * (axe-core, plus unique element ids), with a screenshot of each in screenshots/.
+ */
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { accessibilityProblems } from './helpers/axe.ts';
 import { launch, openPage, screenshot } from './helpers/browser.ts';
 import { demoStudyId, settle, signInAs, unexpected } from './helpers/session.ts';
 
@@ -14,13 +18,17 @@ afterAll(async () => {
   await browser?.close();
 });
 
-/** Opens a path, waits for `ready`, takes the screenshot and returns the console errors it caused. */
+/** Accessibility problems of every page visited, reported together at the end of each test. */
+let a11y: string[] = [];
+
+/** Opens a path, waits for `ready`, takes the screenshot, checks accessibility and returns the console errors it caused. */
 async function visit(page: Page, problems: string[], path: string, name: string, ready: (p: Page) => Promise<unknown>): Promise<string[]> {
   const from = problems.length;
   await page.goto(`${appUrl}${path}`);
   await ready(page);
   await settle(page);
   await screenshot(page, name);
+  a11y.push(...(await accessibilityProblems(page, name)));
   return problems.slice(from);
 }
 
@@ -28,6 +36,7 @@ const heading = (name: string | RegExp) => (p: Page) => p.getByRole('heading', {
 
 describe('every page opens without console errors', () => {
   it('signed out: sign-in, forgot password, a bad reset link, a bad invitation link, 404', async () => {
+    a11y = [];
     const { page, problems } = await openPage(browser);
     const found: Record<string, string[]> = {};
     found['sign-in'] = await visit(page, problems, '/sign-in', 'page-sign-in', heading('Sign in'));
@@ -39,10 +48,13 @@ describe('every page opens without console errors', () => {
     for (const k of ['reset', 'invite']) found[k] = unexpected(found[k]!, [/status of 40[04]/]);
     for (const k of ['sign-in', 'forgot', '404']) found[k] = unexpected(found[k]!);
     expect(Object.fromEntries(Object.entries(found).filter(([, v]) => v.length > 0))).toEqual({});
+    expect(a11y).toEqual([]);
     await page.context().close();
   });
 
-  it('signed in as the admin: studies, every tab of the demo study, packet, account, team, outbox', async () => {
+  // An accessibility check per page and tab takes a few seconds each on a loaded machine: a budget, not a speed check.
+  it('signed in as the admin: studies, every tab of the demo study, packet, account, team, outbox', { timeout: 400_000 }, async () => {
+    a11y = [];
     const { page, problems } = await openPage(browser);
     await signInAs(page, appUrl, 'admin');
     const studyId = await demoStudyId(page, appUrl);
@@ -62,7 +74,9 @@ describe('every page opens without console errors', () => {
       await tab.click();
       await expect.poll(() => tab.getAttribute('aria-selected')).toBe('true');
       await settle(page);
-      await screenshot(page, `page-study-tab-${i + 1}-${label.toLowerCase().replace(/\W+/g, '-')}`);
+      const shot = `page-study-tab-${i + 1}-${label.toLowerCase().replace(/\W+/g, '-')}`;
+      await screenshot(page, shot);
+      a11y.push(...(await accessibilityProblems(page, shot)));
       found[`tab ${label}`] = problems.slice(from);
     }
 
@@ -77,6 +91,7 @@ describe('every page opens without console errors', () => {
     found['404'] = await visit(page, problems, '/no/such/page', 'page-404-signed-in', (p) => p.getByText('Nothing here').waitFor());
     for (const k of Object.keys(found)) if (k !== 'missing study') found[k] = unexpected(found[k]!);
     expect(Object.fromEntries(Object.entries(found).filter(([, v]) => v.length > 0))).toEqual({});
+    expect(a11y).toEqual([]);
     await page.context().close();
   });
 });
