@@ -8,7 +8,8 @@ import { invalidInput } from '../errors.ts';
 import type { DeviceCreate, DeviceLayout, DevicePatch } from '../../shared/schemas/device.ts';
 import { DesignSchema, type Design } from '../../shared/schemas/design.ts';
 import { deviceRegion } from '../../shared/devices/device-region.ts';
-import { deviceSweepVariants, type DeviceSweepRequest, type DeviceSweepRow } from '../../shared/devices/device-sweep.ts';
+import type { DeviceSweepAnswer } from '../../shared/api/devices.ts';
+import { deviceSweepVariants, type DeviceSweepRequest } from '../../shared/devices/device-sweep.ts';
 import { runDeviceVariant } from '../devices/device-sweep-pool.ts';
 import { resolveElementPatterns } from './element-pattern-service.ts';
 import { audit } from './audit-service.ts';
@@ -133,10 +134,5 @@ export async function sweepDevice(ctx: AppContext, user: AuthUser, id: string, r
   return { deviceId: row.id, moduleIndex: request.moduleIndex, sheetName: sheetRow ? sheetName(sheetRow) : null, region: deviceRegion(sheet).kind, rows };
 }
 
-export interface DeviceSweepResult {
-  deviceId: string;
-  moduleIndex: number;
-  sheetName: string | null;
-  region: 'sphere' | 'sector';
-  rows: DeviceSweepRow[];
-}
+/** POST /api/devices/:id/sweep answers the shape the client reads (shared/api/devices.ts). */
+export type DeviceSweepResult = DeviceSweepAnswer;

@@ -8,8 +8,8 @@ import { GridTooLarge, compileGrid } from '../../shared/sweep/grid.ts';
 import type { SweepRequest } from '../../shared/sweep/request.ts';
 import type { AuthUser } from '../auth/types.ts';
 import type { AppContext } from '../context.ts';
-import type { SweepProgress as SharedSweepProgress } from '../../shared/api/sweeps.ts';
-import { FINISHED_STATUSES, Sweep, type SweepStatus } from '../entities/sweep.ts';
+import type { SweepCreated, SweepProgress as SharedSweepProgress } from '../../shared/api/sweeps.ts';
+import { FINISHED_STATUSES, Sweep } from '../entities/sweep.ts';
 import { Conflict, invalidInput } from '../errors.ts';
 import { findInStudy, findStudyFor, type StudyNeed } from './study-access.ts';
 import { resolveGridElements } from './element-pattern-service.ts';
@@ -46,7 +46,7 @@ export function progressOf(s: Sweep, now = Date.now()): SweepProgress {
 }
 
 /** Creates the sweep and its chunks; the sweep runner sends them to the queue. 400 when over the limit or empty. */
-export async function createSweep(ctx: AppContext, user: AuthUser, studyId: string, body: SweepRequest): Promise<{ id: string; pointsTotal: number }> {
+export async function createSweep(ctx: AppContext, user: AuthUser, studyId: string, body: SweepRequest): Promise<SweepCreated> {
   await findStudyFor(ctx, user, studyId, 'edit');
   // Table elements carry their pattern from here on: the stored grid is exactly what the worker threads evaluate.
   body = { ...body, grid: await resolveGridElements(ctx, studyId, body.grid) };

@@ -17,6 +17,8 @@ export interface DeviceRow {
 
 /** POST /api/devices/:id/sweep. */
 export interface DeviceSweepAnswer {
+  deviceId: string;
+  moduleIndex: number;
   region: 'sphere' | 'sector';
   sheetName: string | null;
   rows: DeviceSweepRow[];
