@@ -3,6 +3,7 @@
  * The drawing-to-file work lives in use-chart-save.ts; this adds the component-facing state.
  */
 import { ref, type Ref } from 'vue';
+import { errorMessage } from '@/api/errors';
 import { saveChart, type ChartFormat } from './use-chart-save.ts';
 
 export function useChartExport(container: Ref<HTMLElement | null | undefined>, baseName: () => string) {
@@ -16,7 +17,7 @@ export function useChartExport(container: Ref<HTMLElement | null | undefined>, b
     try {
       await saveChart(container.value, baseName(), format);
     } catch (err) {
-      error.value = err instanceof Error ? err.message : String(err);
+      error.value = errorMessage(err);
     } finally {
       saving.value = false;
     }

@@ -3,6 +3,7 @@
  * one, whose answers are dropped). Without Worker support (component tests) it computes on the main thread.
  */
 import { onBeforeUnmount, ref, shallowRef } from 'vue';
+import { errorMessage } from '@/api/errors';
 import { deviceCoverage, type DeviceCoverageInput, type DeviceCoverageResult } from '@shared/devices/index.ts';
 
 interface WorkerAnswer {
@@ -57,7 +58,7 @@ export function useDeviceCoverage(options: { useWorker?: boolean } = {}) {
       result.value = deviceCoverage(plain, (done, total) => (percent.value = Math.round((100 * done) / total)));
       elapsedMs.value = performance.now() - started;
     } catch (err) {
-      error.value = err instanceof Error ? err.message : String(err);
+      error.value = errorMessage(err);
     } finally {
       busy.value = false;
     }

@@ -5,6 +5,7 @@
  * Without Worker support (tests, old browsers) it computes on the main thread.
  */
 import { onBeforeUnmount, ref, shallowRef, watch, type Ref } from 'vue';
+import { errorMessage } from '@/api/errors';
 import { getActivePinia } from 'pinia';
 import { useElementPatternsStore } from '@/stores/element-patterns';
 import type { DesignInput } from '@shared/schemas/design.ts';
@@ -69,7 +70,7 @@ export function usePreview(source: Ref<PreviewSource | null>, options: { debounc
       result.value = computePreview(request);
       error.value = null;
     } catch (err) {
-      error.value = `The preview failed: ${err instanceof Error ? err.message : String(err)}`;
+      error.value = `The preview failed: ${errorMessage(err)}`;
     } finally {
       busy.value = false;
     }
