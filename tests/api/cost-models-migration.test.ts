@@ -1,30 +1,15 @@
 /** The cost-model migration: up adds the table, the sweep version and the indexed design columns; down removes only them. */
-import pg from 'pg';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { createDataSource } from '../../server/data-source.ts';
+import { describe, expect, it } from 'vitest';
+import { useOwnDatabase } from '../helpers/own-database.ts';
 
 const DB = 'lobewise_cost_migration_check';
 const MINE = 'CostModels1796166102627';
 const COST_COLUMNS = ['beamformer_chips', 'conducted_power_dbm', 'cost_usd', 'dc_power_w', 'heat_w_per_cm2'];
-const admin = () => new pg.Client({ connectionString: inject('adminUrl') });
-
-beforeAll(async () => {
-  const c = admin();
-  await c.connect();
-  await c.query(`DROP DATABASE IF EXISTS ${DB}`);
-  await c.query(`CREATE DATABASE ${DB} OWNER lobewise`);
-  await c.end();
-});
-afterAll(async () => {
-  const c = admin();
-  await c.connect();
-  await c.query(`DROP DATABASE IF EXISTS ${DB} WITH (FORCE)`);
-  await c.end();
-});
+const { dataSource } = useOwnDatabase(DB);
 
 describe('cost models (migration)', () => {
   it('goes down to the schema before it, keeping stored designs, and up again with empty cost columns', async () => {
-    const db = createDataSource(inject('databaseUrl').replace(/\/[^/]+$/, `/${DB}`));
+    const db = dataSource();
     await db.initialize();
     const columns = async () =>
       ((await db.query(

@@ -1,26 +1,11 @@
-import pg from 'pg';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { inject } from 'vitest';
-import { createDataSource } from '../../server/data-source.ts';
+import { describe, expect, it } from 'vitest';
+import type { createDataSource } from '../../server/data-source.ts';
+import { useOwnDatabase } from '../helpers/own-database.ts';
 import { migrations } from '../../server/migrations/index.ts';
 
 // A database of its own, so reverting every migration cannot disturb other test files.
 const DB = 'lobewise_migration_check';
-const admin = () => new pg.Client({ connectionString: inject('adminUrl') });
-
-beforeAll(async () => {
-  const c = admin();
-  await c.connect();
-  await c.query(`DROP DATABASE IF EXISTS ${DB}`);
-  await c.query(`CREATE DATABASE ${DB} OWNER lobewise`);
-  await c.end();
-});
-afterAll(async () => {
-  const c = admin();
-  await c.connect();
-  await c.query(`DROP DATABASE IF EXISTS ${DB} WITH (FORCE)`);
-  await c.end();
-});
+const { dataSource } = useOwnDatabase(DB);
 
 async function tables(db: ReturnType<typeof createDataSource>): Promise<string[]> {
   const rows: { tablename: string }[] = await db.query(
@@ -31,8 +16,7 @@ async function tables(db: ReturnType<typeof createDataSource>): Promise<string[]
 
 describe('migrations', () => {
   it('run up, all the way down, and up again cleanly', async () => {
-    const url = inject('databaseUrl').replace(/\/[^/]+$/, `/${DB}`);
-    const db = createDataSource(url);
+    const db = dataSource();
     await db.initialize();
     try {
       const ran = await db.runMigrations({ transaction: 'each' });

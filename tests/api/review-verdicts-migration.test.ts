@@ -1,25 +1,11 @@
 /** The verdict rename keeps stored answers: 'approved' becomes 'accepted', 'changes_requested' 'sent_back', each kept as a trail answer; down restores them. */
-import pg from 'pg';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { createDataSource } from '../../server/data-source.ts';
+import { describe, expect, it } from 'vitest';
+import type { createDataSource } from '../../server/data-source.ts';
+import { useOwnDatabase } from '../helpers/own-database.ts';
 
 const DB = 'lobewise_verdicts_migration_check';
 const MINE = 'ReviewVerdictsAndJudgedSheet1796166016790';
-const admin = () => new pg.Client({ connectionString: inject('adminUrl') });
-
-beforeAll(async () => {
-  const c = admin();
-  await c.connect();
-  await c.query(`DROP DATABASE IF EXISTS ${DB}`);
-  await c.query(`CREATE DATABASE ${DB} OWNER lobewise`);
-  await c.end();
-});
-afterAll(async () => {
-  const c = admin();
-  await c.connect();
-  await c.query(`DROP DATABASE IF EXISTS ${DB} WITH (FORCE)`);
-  await c.end();
-});
+const { dataSource } = useOwnDatabase(DB);
 
 type Db = ReturnType<typeof createDataSource>;
 
@@ -34,7 +20,7 @@ async function downThrough(db: Db, name: string): Promise<void> {
 
 describe('review verdicts in our own words (migration)', () => {
   it('renames stored answers and the audit trail, keeps each as a trail answer, and reverts cleanly', async () => {
-    const db = createDataSource(inject('databaseUrl').replace(/\/[^/]+$/, `/${DB}`));
+    const db = dataSource();
     await db.initialize();
     try {
       await db.runMigrations({ transaction: 'each' });

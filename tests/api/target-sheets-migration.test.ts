@@ -1,29 +1,14 @@
 /** The move to several sheets per study keeps an existing study's one sheet and points its candidates and sweeps at it. */
-import pg from 'pg';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { createDataSource } from '../../server/data-source.ts';
+import { describe, expect, it } from 'vitest';
+import { useOwnDatabase } from '../helpers/own-database.ts';
 
 const DB = 'lobewise_sheets_migration_check';
 const MINE = 'TargetSheetsAndDevices1796165946128';
-const admin = () => new pg.Client({ connectionString: inject('adminUrl') });
-
-beforeAll(async () => {
-  const c = admin();
-  await c.connect();
-  await c.query(`DROP DATABASE IF EXISTS ${DB}`);
-  await c.query(`CREATE DATABASE ${DB} OWNER lobewise`);
-  await c.end();
-});
-afterAll(async () => {
-  const c = admin();
-  await c.connect();
-  await c.query(`DROP DATABASE IF EXISTS ${DB} WITH (FORCE)`);
-  await c.end();
-});
+const { dataSource } = useOwnDatabase(DB);
 
 describe('several target sheets per study (migration)', () => {
   it('keeps the existing sheet as the first and makes candidates and sweeps name it; down keeps one sheet', async () => {
-    const db = createDataSource(inject('databaseUrl').replace(/\/[^/]+$/, `/${DB}`));
+    const db = dataSource();
     await db.initialize();
     try {
       await db.runMigrations({ transaction: 'each' });
