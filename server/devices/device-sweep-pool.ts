@@ -1,40 +1,18 @@
 /**
- * The thread pool for device sweeps: each variant's coverage runs on a thread (one per core at most, started on
- * demand, gone when idle), so a sweep never blocks the event loop. The same shape as the coverage pool.
+ * The thread pool for device sweeps: each variant's coverage runs on a thread of a pool of its own
+ * (see on-demand-pool.ts), so a sweep never blocks the event loop.
  */
-import os from 'node:os';
 import { fileURLToPath } from 'node:url';
-import { Piscina } from 'piscina';
 import type { DeviceSweepRow } from '../../shared/devices/index.ts';
 import type { DeviceVariantTask } from '../../workers/device-coverage.ts';
+import { onDemandPool } from '../compute/on-demand-pool.ts';
 
-const WORKER_FILE = fileURLToPath(new URL('../../workers/device-coverage.ts', import.meta.url));
-const IDLE_MS = 10_000;
 const MAX_QUEUE = 96;
+const pool = onDemandPool<DeviceVariantTask, DeviceSweepRow>(fileURLToPath(new URL('../../workers/device-coverage.ts', import.meta.url)), MAX_QUEUE);
 
-let pool: Piscina | null = null;
+/** A new sweep is refused while half the queue is taken (one sweep queues up to 48 variants). */
+export const deviceSweepQueueFull = (): boolean => pool.queued() >= MAX_QUEUE / 2;
 
-function workerExecArgv(): string[] {
-  const argv = process.execArgv.filter((a) => !a.startsWith('--inspect'));
-  return argv.some((a) => a.includes('tsx')) ? argv : [...argv, '--import', 'tsx'];
-}
+export const runDeviceVariant = (task: DeviceVariantTask, signal?: AbortSignal): Promise<DeviceSweepRow> => pool.run(task, signal);
 
-function threads(): number {
-  const cores = typeof os.availableParallelism === 'function' ? os.availableParallelism() : os.cpus().length;
-  return Math.max(1, Math.min(2, cores));
-}
-
-export function deviceSweepQueueFull(): boolean {
-  return pool !== null && pool.queueSize >= MAX_QUEUE / 2;
-}
-
-export function runDeviceVariant(task: DeviceVariantTask, signal?: AbortSignal): Promise<DeviceSweepRow> {
-  pool ??= new Piscina({ filename: WORKER_FILE, minThreads: 0, maxThreads: threads(), idleTimeout: IDLE_MS, maxQueue: MAX_QUEUE, execArgv: workerExecArgv() });
-  return pool.run(task, { signal: signal ?? null }) as Promise<DeviceSweepRow>;
-}
-
-export async function destroyDeviceSweepPool(): Promise<void> {
-  const p = pool;
-  pool = null;
-  await p?.destroy();
-}
+export const destroyDeviceSweepPool = (): Promise<void> => pool.destroy();
