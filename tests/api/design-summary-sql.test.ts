@@ -3,22 +3,10 @@
  * lands) and the scan-window aggregates (SQL, recomputed per request). A window that holds every steer must give
  * every summary column exactly as stored, for a randomly drawn sweep.
  */
-import type { Express } from 'express';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { createApp } from '../../server/app.ts';
-import type { AppContext } from '../../server/context.ts';
-import { Study } from '../../server/entities/study.ts';
-import { startSweepRunner, type SweepRunner } from '../../server/sweeps/runner.ts';
+import { describe, expect, it } from 'vitest';
 import { mulberry32 } from '../../shared/bench/random.ts';
 import { DESIGN_SUMMARY_COLUMNS } from '../../shared/sweep/columns.ts';
-import { authed, seedTeam, type AuthedClient } from '../helpers/auth.ts';
-import { openTestContext, truncateAll } from '../helpers/db.ts';
-
-let ctx: AppContext;
-let runner: SweepRunner;
-let app: Express;
-let engineer: AuthedClient;
-let sweepId: string;
+import { useFinishedSweep } from '../helpers/sweep-world.ts';
 
 /** A grid drawn from a fixed seed: two values of each varied field, steers in both planes. */
 function randomGrid(seed: number) {
@@ -39,34 +27,10 @@ function randomGrid(seed: number) {
   };
 }
 
-beforeAll(async () => {
-  ctx = await openTestContext({ SWEEP_POINT_LIMIT: '5000' });
-  await truncateAll(ctx.db);
-  runner = await startSweepRunner({ db: ctx.db, url: inject('databaseUrl'), log: ctx.log, threads: 2, embedded: true, recoverEverySeconds: 1 });
-  ctx.sweeps = runner;
-  app = createApp(ctx);
-  const team = await seedTeam(ctx.db);
-  engineer = await authed(app, team.engineer);
-  const study = await ctx.db.getRepository(Study).save({ teamId: team.team.id, ownerId: team.engineer.id, name: 'Summary twins' });
-  const res = await engineer.post(`/api/studies/${study.id}/sweeps`).send({ name: 'random grid', grid: randomGrid(20261201) });
-  expect(res.status, JSON.stringify(res.body)).toBe(201);
-  sweepId = res.body.id;
-  const deadline = Date.now() + 90_000;
-  for (;;) {
-    const s = await engineer.get(`/api/sweeps/${sweepId}`);
-    if (s.body.status === 'done') break;
-    if (Date.now() > deadline) throw new Error(`sweep still ${s.body.status}`);
-    await new Promise((r) => setTimeout(r, 200));
-  }
-});
-
-afterAll(async () => {
-  await runner?.stop();
-  await ctx?.db.destroy();
-});
+const world = useFinishedSweep('random grid', () => randomGrid(20261201));
 
 const designs = async (qs: string) => {
-  const res = await engineer.get(`/api/sweeps/${sweepId}/designs?limit=1000&sort=designIndex:asc${qs}`);
+  const res = await world.engineer.get(`/api/sweeps/${world.sweepId}/designs?limit=1000&sort=designIndex:asc${qs}`);
   expect(res.status, JSON.stringify(res.body)).toBe(200);
   return res.body.rows as Array<Record<string, number | boolean | null>>;
 };

@@ -1,19 +1,6 @@
-import type { Express } from 'express';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { createApp } from '../../server/app.ts';
-import type { AppContext } from '../../server/context.ts';
-import { Study } from '../../server/entities/study.ts';
-import { startSweepRunner, type SweepRunner } from '../../server/sweeps/runner.ts';
+import { describe, expect, it } from 'vitest';
 import { figuresFromPoints, type FigurePoint } from '../../shared/targets/figures.ts';
-import { authed, seedTeam, type AuthedClient } from '../helpers/auth.ts';
-import { openTestContext, truncateAll } from '../helpers/db.ts';
-
-let ctx: AppContext;
-let runner: SweepRunner;
-let app: Express;
-let engineer: AuthedClient;
-let outsider: AuthedClient;
-let sweepId: string;
+import { useFinishedSweep } from '../helpers/sweep-world.ts';
 
 /** 4 designs × 5 azimuth steers (0..60 step 15); the wider pitch shows grating lobes near the edge. */
 const GRID = {
@@ -28,43 +15,17 @@ const GRID = {
 type PointRow = FigurePoint & { designIndex: number; metrics: FigurePoint['metrics'] | null };
 type DesignRow = Record<string, number | boolean | null> & { designIndex: number };
 
-beforeAll(async () => {
-  ctx = await openTestContext({ SWEEP_POINT_LIMIT: '5000' });
-  await truncateAll(ctx.db);
-  runner = await startSweepRunner({ db: ctx.db, url: inject('databaseUrl'), log: ctx.log, threads: 2, embedded: true, recoverEverySeconds: 1 });
-  ctx.sweeps = runner;
-  app = createApp(ctx);
-  const team = await seedTeam(ctx.db);
-  const other = await seedTeam(ctx.db);
-  engineer = await authed(app, team.engineer);
-  outsider = await authed(app, other.engineer);
-  const study = await ctx.db.getRepository(Study).save({ teamId: team.team.id, ownerId: team.engineer.id, name: 'Rooftop relay' });
-  const res = await engineer.post(`/api/studies/${study.id}/sweeps`).send({ name: 'scan window', grid: GRID });
-  expect(res.status).toBe(201);
-  sweepId = res.body.id;
-  const deadline = Date.now() + 60_000;
-  for (;;) {
-    const s = await engineer.get(`/api/sweeps/${sweepId}`);
-    if (s.body.status === 'done') break;
-    if (Date.now() > deadline) throw new Error(`sweep still ${s.body.status}`);
-    await new Promise((r) => setTimeout(r, 200));
-  }
-});
-
-afterAll(async () => {
-  await runner?.stop();
-  await ctx?.db.destroy();
-});
+const world = useFinishedSweep('scan window', () => GRID, 60_000);
 
 const designs = async (qs: string) => {
-  const res = await engineer.get(`/api/sweeps/${sweepId}/designs?limit=1000&${qs}`);
+  const res = await world.engineer.get(`/api/sweeps/${world.sweepId}/designs?limit=1000&${qs}`);
   expect(res.status, JSON.stringify(res.body)).toBe(200);
   return res.body as { total: number; rows: DesignRow[] };
 };
 
 describe('GET /api/sweeps/:id/designs with a scan window', () => {
   it('gives each design the figures of its points steered inside the window, as the preview computes them', async () => {
-    const points = (await engineer.get(`/api/sweeps/${sweepId}/results?limit=1000`)).body.rows as PointRow[];
+    const points = (await world.engineer.get(`/api/sweeps/${world.sweepId}/results?limit=1000`)).body.rows as PointRow[];
     expect(points).toHaveLength(20);
     const windowed = await designs('scanAz=-30..30&sort=designIndex:asc');
     const whole = await designs('sort=designIndex:asc');
@@ -119,18 +80,18 @@ describe('GET /api/sweeps/:id/designs with a scan window', () => {
 
   it('refuses a bad window with a 400 naming scanAz or scanEl', async () => {
     for (const bad of ['30..-30', '-100..30', '0..91', 'wide', '..30', '-30']) {
-      const res = await engineer.get(`/api/sweeps/${sweepId}/designs`).query({ scanAz: bad });
+      const res = await world.engineer.get(`/api/sweeps/${world.sweepId}/designs`).query({ scanAz: bad });
       expect(res.status, bad).toBe(400);
       expect(res.body.error.fields.map((f: { field: string }) => f.field)).toContain('query.scanAz');
     }
-    const el = await engineer.get(`/api/sweeps/${sweepId}/designs`).query({ scanEl: '5..1' });
+    const el = await world.engineer.get(`/api/sweeps/${world.sweepId}/designs`).query({ scanEl: '5..1' });
     expect(el.status).toBe(400);
     expect(el.body.error.message).toContain('scanEl');
     // Points carry their own steering; the window belongs to the design rows only.
-    expect((await engineer.get(`/api/sweeps/${sweepId}/results`).query({ scanAz: '-30..30' })).status).toBe(400);
+    expect((await world.engineer.get(`/api/sweeps/${world.sweepId}/results`).query({ scanAz: '-30..30' })).status).toBe(400);
   });
 
   it('another team sees 404', async () => {
-    expect((await outsider.get(`/api/sweeps/${sweepId}/designs?scanAz=-30..30`)).status).toBe(404);
+    expect((await world.outsider.get(`/api/sweeps/${world.sweepId}/designs?scanAz=-30..30`)).status).toBe(404);
   });
 });
