@@ -10,22 +10,22 @@ import { meOf } from '../services/me-service.ts';
 /** /api/account: your own name, password and personal API tokens. */
 export function accountRouter(ctx: AppContext): Router {
   const router = Router();
-  router.patch('/', requireAuth, validate({ body: ProfileBody }), async (req, res) => {
+  router.patch('/account', requireAuth, validate({ body: ProfileBody }), async (req, res) => {
     const user = await updateProfile(ctx, userOf(req), (req.body as { name: string }).name);
     res.json(await meOf(ctx, user));
   });
-  router.put('/password', requireAuth, validate({ body: PasswordChangeBody }), async (req, res) => {
+  router.put('/account/password', requireAuth, validate({ body: PasswordChangeBody }), async (req, res) => {
     const body = req.body as { currentPassword: string; newPassword: string };
     await changePassword(ctx, userOf(req), body.currentPassword, body.newPassword, req.sessionID);
     res.status(204).end();
   });
-  router.get('/tokens', requireAuth, async (req, res) => {
+  router.get('/account/tokens', requireAuth, async (req, res) => {
     res.json(await listTokens(ctx, userOf(req)));
   });
-  router.post('/tokens', requireAuth, validate({ body: ApiTokenBody }), async (req, res) => {
+  router.post('/account/tokens', requireAuth, validate({ body: ApiTokenBody }), async (req, res) => {
     res.status(201).json(await createToken(ctx, userOf(req), (req.body as { name: string }).name));
   });
-  router.delete('/tokens/:tokenId', requireAuth, validate({ params: TokenIdParams }), async (req, res) => {
+  router.delete('/account/tokens/:tokenId', requireAuth, validate({ params: TokenIdParams }), async (req, res) => {
     await revokeToken(ctx, userOf(req), req.params.tokenId as string);
     res.status(204).end();
   });

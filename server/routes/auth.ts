@@ -45,17 +45,17 @@ export function authRouter(ctx: AppContext): Router {
     });
   };
 
-  router.get('/csrf', csrf.issue);
-  router.post('/login', ...signInLimiters(), validate({ body: LoginBody }), signIn);
-  router.post('/logout', signOut);
-  router.post('/password-reset', mailRequestLimiter(), validate({ body: ResetRequestBody }), async (req, res) => {
+  router.get('/auth/csrf', csrf.issue);
+  router.post('/auth/login', ...signInLimiters(), validate({ body: LoginBody }), signIn);
+  router.post('/auth/logout', signOut);
+  router.post('/auth/password-reset', mailRequestLimiter(), validate({ body: ResetRequestBody }), async (req, res) => {
     await requestPasswordReset(ctx, (req.body as { email: string }).email, linkBase(ctx.config, req));
     res.status(202).json({ message: 'If that address has an account, a reset link is on its way. It expires in 1 hour.' });
   });
-  router.get('/password-reset/:token', validate({ params: TokenParams }), async (req, res) => {
+  router.get('/auth/password-reset/:token', validate({ params: TokenParams }), async (req, res) => {
     res.json(await checkResetLink(ctx, req.params.token as string));
   });
-  router.post('/password-reset/:token', validate({ params: TokenParams, body: ResetBody }), async (req, res) => {
+  router.post('/auth/password-reset/:token', validate({ params: TokenParams, body: ResetBody }), async (req, res) => {
     await resetPassword(ctx, req.params.token as string, (req.body as { password: string }).password);
     res.status(204).end();
   });

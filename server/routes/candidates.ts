@@ -17,11 +17,11 @@ const idOf = (req: Request) => String(req.params.id);
 
 /** Mounted by the studies router; mergeParams brings the study's :id. */
 export function studyCandidatesRouter(ctx: AppContext): Router {
-  const router = Router({ mergeParams: true });
-  router.get('/', requireAuth, id, async (req, res) => {
+  const router = Router();
+  router.get('/studies/:id/candidates', requireAuth, id, async (req, res) => {
     res.json(await listCandidates(ctx, userOf(req), idOf(req)));
   });
-  router.post('/', requireRole('engineer'), id, validate({ body: CandidateCreateSchema }), async (req, res) => {
+  router.post('/studies/:id/candidates', requireRole('engineer'), id, validate({ body: CandidateCreateSchema }), async (req, res) => {
     res.status(201).json(await createCandidate(ctx, userOf(req), idOf(req), req.body as CandidateCreate));
   });
   return router;
@@ -29,13 +29,13 @@ export function studyCandidatesRouter(ctx: AppContext): Router {
 
 export function candidatesRouter(ctx: AppContext): Router {
   const router = Router();
-  router.get('/:id', requireAuth, id, async (req, res) => {
+  router.get('/candidates/:id', requireAuth, id, async (req, res) => {
     res.json(await getCandidate(ctx, userOf(req), idOf(req)));
   });
-  router.patch('/:id', requireRole('engineer'), id, validate({ body: CandidatePatchSchema }), async (req, res) => {
+  router.patch('/candidates/:id', requireRole('engineer'), id, validate({ body: CandidatePatchSchema }), async (req, res) => {
     res.json(await patchCandidate(ctx, userOf(req), idOf(req), req.body as CandidatePatch));
   });
-  router.delete('/:id', requireRole('engineer'), id, async (req, res) => {
+  router.delete('/candidates/:id', requireRole('engineer'), id, async (req, res) => {
     await deleteCandidate(ctx, userOf(req), idOf(req));
     res.status(204).end();
   });

@@ -10,11 +10,11 @@ import { IdParamsSchema } from '../../shared/schemas/study.ts';
 const id = validate({ params: IdParamsSchema });
 
 export function studyCostModelRouter(ctx: AppContext): Router {
-  const router = Router({ mergeParams: true });
-  router.get('/', requireAuth, id, async (req, res) => {
+  const router = Router();
+  router.get('/studies/:id/cost-model', requireAuth, id, async (req, res) => {
     res.json(await getCostModel(ctx, userOf(req), String(req.params.id)));
   });
-  router.put('/', requireRole('engineer'), id, validate({ body: CostModelSchema }), async (req, res) => {
+  router.put('/studies/:id/cost-model', requireRole('engineer'), id, validate({ body: CostModelSchema }), async (req, res) => {
     res.json(await putCostModel(ctx, userOf(req), String(req.params.id), req.body as CostModel));
   });
   return router;

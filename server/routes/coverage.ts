@@ -13,7 +13,7 @@ import { resolveElementPatterns } from '../services/element-pattern-service.ts';
  */
 export function coverageRouter(ctx: AppContext): Router {
   const router = Router();
-  router.post('/', requireAuth, validate({ body: CoverageRequestSchema }), async (req, res) => {
+  router.post('/coverage', requireAuth, validate({ body: CoverageRequestSchema }), async (req, res) => {
     const body = req.body as CoverageInput;
     const designs = await resolveElementPatterns(ctx, { user: userOf(req) }, body.modules.map((m) => m.design), (i) => `modules[${i}].design.element.patternId`);
     const input: CoverageInput = { ...body, modules: body.modules.map((m, i) => ({ ...m, design: designs[i]! })) };

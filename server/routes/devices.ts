@@ -15,11 +15,11 @@ const idOf = (req: Request) => String(req.params.id);
 
 /** Mounted by the studies router; mergeParams brings the study's :id. */
 export function studyDevicesRouter(ctx: AppContext): Router {
-  const router = Router({ mergeParams: true });
-  router.get('/', requireAuth, id, async (req, res) => {
+  const router = Router();
+  router.get('/studies/:id/devices', requireAuth, id, async (req, res) => {
     res.json(await listDevices(ctx, userOf(req), idOf(req)));
   });
-  router.post('/', requireRole('engineer'), id, validate({ body: DeviceCreateSchema }), async (req, res) => {
+  router.post('/studies/:id/devices', requireRole('engineer'), id, validate({ body: DeviceCreateSchema }), async (req, res) => {
     res.status(201).json(await createDevice(ctx, userOf(req), idOf(req), req.body as DeviceCreate));
   });
   return router;
@@ -27,14 +27,14 @@ export function studyDevicesRouter(ctx: AppContext): Router {
 
 export function devicesRouter(ctx: AppContext): Router {
   const router = Router();
-  router.get('/:id', requireAuth, id, async (req, res) => {
+  router.get('/devices/:id', requireAuth, id, async (req, res) => {
     res.json(await getDevice(ctx, userOf(req), idOf(req)));
   });
-  router.patch('/:id', requireRole('engineer'), id, validate({ body: DevicePatchSchema }), async (req, res) => {
+  router.patch('/devices/:id', requireRole('engineer'), id, validate({ body: DevicePatchSchema }), async (req, res) => {
     res.json(await patchDevice(ctx, userOf(req), idOf(req), req.body as DevicePatch));
   });
   // Reading is enough: a sweep stores nothing, it answers the variants' coverage rows.
-  router.post('/:id/sweep', requireAuth, id, validate({ body: DeviceSweepRequestSchema }), async (req, res) => {
+  router.post('/devices/:id/sweep', requireAuth, id, validate({ body: DeviceSweepRequestSchema }), async (req, res) => {
     if (deviceSweepQueueFull()) throw new ApiError(503, 'busy', 'sweep: too many device computations waiting; try again shortly');
     const abort = new AbortController();
     res.on('close', () => {
@@ -46,7 +46,7 @@ export function devicesRouter(ctx: AppContext): Router {
       if (!abort.signal.aborted) throw err;
     }
   });
-  router.delete('/:id', requireRole('engineer'), id, async (req, res) => {
+  router.delete('/devices/:id', requireRole('engineer'), id, async (req, res) => {
     await deleteDevice(ctx, userOf(req), idOf(req));
     res.status(204).end();
   });

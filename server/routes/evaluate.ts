@@ -17,7 +17,7 @@ export function evaluateRouter(ctx: AppContext): Router {
     tooFew: 'must hold at least one design',
     tooMany: `must hold at most ${MAX_DESIGNS_PER_CALL} designs`,
   });
-  router.post('/', requireAuth, heavyRequest(ctx), body, async (req, res) => {
+  router.post('/evaluate', requireAuth, heavyRequest(ctx), body, async (req, res) => {
     const json = await evaluateDesigns(ctx, userOf(req), req.body as Design | Design[], workSignal(req));
     res.type('application/json').send(json);
   });

@@ -4,7 +4,7 @@ import type { AppContext } from '../context.ts';
 /** Liveness plus a database round-trip, so a monitor sees a broken database as a broken service. */
 export function healthRouter(ctx: AppContext): Router {
   const router = Router();
-  router.get('/', async (_req, res) => {
+  router.get('/health', async (_req, res) => {
     const started = process.hrtime.bigint();
     try {
       await ctx.db.query('SELECT 1');

@@ -1,4 +1,4 @@
-/** The /api router: one line per resource. */
+/** The /api router: every resource router, each declaring its full paths. */
 import { Router } from 'express';
 import type { AppContext } from '../context.ts';
 import { NotFound } from '../errors.ts';
@@ -11,11 +11,12 @@ import { meRouter } from './me.ts';
 import { outboxRouter } from './outbox.ts';
 import { sharesRouter } from './shares.ts';
 import { teamRouter } from './team.ts';
-import { candidatesRouter } from './candidates.ts';
-import { devicesRouter } from './devices.ts';
+import { candidatesRouter, studyCandidatesRouter } from './candidates.ts';
+import { studyCostModelRouter } from './cost-model.ts';
+import { devicesRouter, studyDevicesRouter } from './devices.ts';
 import { studiesRouter } from './studies.ts';
 import { sweepsRouter } from './sweeps.ts';
-import { targetPresetsRouter } from './target-sheets.ts';
+import { studyTargetSheetRouter, studyTargetSheetsRouter, targetPresetsRouter } from './target-sheets.ts';
 import { reviewRouter } from './review.ts';
 import { benchRouter } from './bench.ts';
 import { rangeDataRouter } from './range-data.ts';
@@ -24,25 +25,14 @@ import { coverageRouter } from './coverage.ts';
 
 export function apiRouter(ctx: AppContext): Router {
   const api = Router();
-  api.use('/health', healthRouter(ctx));
-  api.use('/evaluate', evaluateRouter(ctx));
-  api.use('/auth', authRouter(ctx));
-  api.use('/me', meRouter(ctx));
-  api.use('/account', accountRouter(ctx));
-  api.use('/team', teamRouter(ctx));
-  api.use('/invitations', invitationsRouter(ctx));
-  api.use('/outbox', outboxRouter(ctx));
-  api.use('/studies/:studyId/shares', sharesRouter(ctx));
-  api.use('/studies', studiesRouter(ctx));
-  api.use('/candidates', candidatesRouter(ctx));
-  api.use('/devices', devicesRouter(ctx));
-  api.use(sweepsRouter(ctx));
-  api.use('/target-presets', targetPresetsRouter());
-  api.use(reviewRouter(ctx));
-  api.use(benchRouter(ctx));
-  api.use(rangeDataRouter(ctx));
-  api.use(elementPatternsRouter(ctx));
-  api.use('/coverage', coverageRouter(ctx));
+  // Every router declares its full paths under /api, so each route line reads as the URL it serves.
+  for (const router of [
+    healthRouter(ctx), evaluateRouter(ctx), authRouter(ctx), meRouter(ctx), accountRouter(ctx), teamRouter(ctx),
+    invitationsRouter(ctx), outboxRouter(ctx), sharesRouter(ctx), studiesRouter(ctx), studyCandidatesRouter(ctx),
+    studyCostModelRouter(ctx), studyTargetSheetRouter(ctx), studyTargetSheetsRouter(ctx), studyDevicesRouter(ctx),
+    candidatesRouter(ctx), devicesRouter(ctx), sweepsRouter(ctx), targetPresetsRouter(), reviewRouter(ctx),
+    benchRouter(ctx), rangeDataRouter(ctx), elementPatternsRouter(ctx), coverageRouter(ctx),
+  ]) api.use(router);
   // Anything else under /api is a JSON 404, never the client's index.html.
   api.use((req, _res, next) => next(NotFound(`route ${req.method} ${req.baseUrl}${req.path}`)));
   return api;

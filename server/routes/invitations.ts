@@ -18,9 +18,9 @@ export function invitationsRouter(ctx: AppContext): Router {
     });
   };
 
-  router.get('/:token', validate({ params: TokenParams }), async (req, res) => {
+  router.get('/invitations/:token', validate({ params: TokenParams }), async (req, res) => {
     res.json(await describeInvitation(ctx, req.params.token as string));
   });
-  router.post('/:token/accept', validate({ params: TokenParams, body: AcceptInviteBody }), accept);
+  router.post('/invitations/:token/accept', validate({ params: TokenParams, body: AcceptInviteBody }), accept);
   return router;
 }

@@ -7,11 +7,11 @@ import { getShares, putShares } from '../services/share-service.ts';
 
 /** /api/studies/:studyId/shares: the owner decides who else reads or edits the study. */
 export function sharesRouter(ctx: AppContext): Router {
-  const router = Router({ mergeParams: true });
-  router.get('/', requireAuth, validate({ params: StudyIdParams }), async (req, res) => {
+  const router = Router();
+  router.get('/studies/:studyId/shares', requireAuth, validate({ params: StudyIdParams }), async (req, res) => {
     res.json(await getShares(ctx, userOf(req), (req.params as { studyId: string }).studyId));
   });
-  router.put('/', requireAuth, validate({ params: StudyIdParams, body: SharesBody }), async (req, res) => {
+  router.put('/studies/:studyId/shares', requireAuth, validate({ params: StudyIdParams, body: SharesBody }), async (req, res) => {
     res.json(await putShares(ctx, userOf(req), (req.params as { studyId: string }).studyId, req.body as SharesInput));
   });
   return router;

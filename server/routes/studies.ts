@@ -26,10 +26,6 @@ import {
   type StudyExport,
   type StudyPatch,
 } from '../../shared/schemas/study.ts';
-import { studyCandidatesRouter } from './candidates.ts';
-import { studyDevicesRouter } from './devices.ts';
-import { studyCostModelRouter } from './cost-model.ts';
-import { studyTargetSheetRouter, studyTargetSheetsRouter } from './target-sheets.ts';
 
 const id = validate({ params: IdParamsSchema });
 const idOf = (req: Request) => String(req.params.id);
@@ -42,36 +38,31 @@ function exportFileName(name: string): string {
 
 export function studiesRouter(ctx: AppContext): Router {
   const router = Router();
-  router.get('/', requireAuth, validate({ query: StudyListQuerySchema }), async (req, res) => {
+  router.get('/studies', requireAuth, validate({ query: StudyListQuerySchema }), async (req, res) => {
     res.json(await listStudies(ctx, userOf(req), req.query as unknown as { archived: boolean }));
   });
-  router.post('/', requireRole('engineer'), validate({ body: StudyCreateSchema }), async (req, res) => {
+  router.post('/studies', requireRole('engineer'), validate({ body: StudyCreateSchema }), async (req, res) => {
     res.status(201).json(await createStudy(ctx, userOf(req), req.body as StudyCreate));
   });
-  router.post('/import', requireRole('engineer'), validate({ body: StudyExportSchema }), async (req, res) => {
+  router.post('/studies/import', requireRole('engineer'), validate({ body: StudyExportSchema }), async (req, res) => {
     res.status(201).json(await importStudy(ctx, userOf(req), req.body as StudyExport));
   });
-  router.get('/:id', requireAuth, id, async (req, res) => {
+  router.get('/studies/:id', requireAuth, id, async (req, res) => {
     res.json(await getStudy(ctx, userOf(req), idOf(req)));
   });
-  router.patch('/:id', requireRole('engineer'), id, validate({ body: StudyPatchSchema }), async (req, res) => {
+  router.patch('/studies/:id', requireRole('engineer'), id, validate({ body: StudyPatchSchema }), async (req, res) => {
     res.json(await patchStudy(ctx, userOf(req), idOf(req), req.body as StudyPatch));
   });
-  router.delete('/:id', requireRole('engineer'), id, async (req, res) => {
+  router.delete('/studies/:id', requireRole('engineer'), id, async (req, res) => {
     await deleteStudy(ctx, userOf(req), idOf(req));
     res.status(204).end();
   });
-  router.post('/:id/duplicate', requireRole('engineer'), id, async (req, res) => {
+  router.post('/studies/:id/duplicate', requireRole('engineer'), id, async (req, res) => {
     res.status(201).json(await duplicateStudy(ctx, userOf(req), idOf(req)));
   });
-  router.get('/:id/export', requireAuth, id, async (req, res) => {
+  router.get('/studies/:id/export', requireAuth, id, async (req, res) => {
     const file = await exportStudy(ctx, userOf(req), idOf(req));
     res.attachment(exportFileName(file.study.name)).json(file);
   });
-  router.use('/:id/candidates', studyCandidatesRouter(ctx));
-  router.use('/:id/cost-model', studyCostModelRouter(ctx));
-  router.use('/:id/target-sheet', studyTargetSheetRouter(ctx));
-  router.use('/:id/target-sheets', studyTargetSheetsRouter(ctx));
-  router.use('/:id/devices', studyDevicesRouter(ctx));
   return router;
 }

@@ -1,6 +1,6 @@
 /**
  * Sweeps: start one in a study, list a study's sweeps, follow progress (JSON or server-sent events),
- * cancel, and read results (points, design rows, CSV). Mounted at /api.
+ * cancel, and read results (points, design rows, CSV).
  */
 import { Router, type Request } from 'express';
 import { DesignsQuerySchema, PointsQuerySchema, SteerSpanQuerySchema, type ResultsQuery } from '../../shared/sweep/results-query.ts';

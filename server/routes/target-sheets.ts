@@ -29,11 +29,11 @@ const sheetParams = validate({ params: SheetParamsSchema });
 
 /** The study's default sheet. Mounted by the studies router; mergeParams brings the study's :id. */
 export function studyTargetSheetRouter(ctx: AppContext): Router {
-  const router = Router({ mergeParams: true });
-  router.get('/', requireAuth, id, async (req, res) => {
+  const router = Router();
+  router.get('/studies/:id/target-sheet', requireAuth, id, async (req, res) => {
     res.json(await getTargetSheet(ctx, userOf(req), String(req.params.id)));
   });
-  router.put('/', requireRole('engineer'), id, validate({ body: TargetSheetPutSchema }), async (req, res) => {
+  router.put('/studies/:id/target-sheet', requireRole('engineer'), id, validate({ body: TargetSheetPutSchema }), async (req, res) => {
     res.json(await putTargetSheet(ctx, userOf(req), String(req.params.id), req.body as TargetSheetPut));
   });
   return router;
@@ -41,20 +41,20 @@ export function studyTargetSheetRouter(ctx: AppContext): Router {
 
 /** Every sheet of the study. Mounted by the studies router; mergeParams brings the study's :id. */
 export function studyTargetSheetsRouter(ctx: AppContext): Router {
-  const router = Router({ mergeParams: true });
-  router.get('/', requireAuth, id, async (req, res) => {
+  const router = Router();
+  router.get('/studies/:id/target-sheets', requireAuth, id, async (req, res) => {
     res.json(await listTargetSheets(ctx, userOf(req), String(req.params.id)));
   });
-  router.post('/', requireRole('engineer'), id, validate({ body: TargetSheetCreateSchema }), async (req, res) => {
+  router.post('/studies/:id/target-sheets', requireRole('engineer'), id, validate({ body: TargetSheetCreateSchema }), async (req, res) => {
     res.status(201).json(await createTargetSheet(ctx, userOf(req), String(req.params.id), req.body as TargetSheetPut));
   });
-  router.get('/:sheetId', requireAuth, sheetParams, async (req, res) => {
+  router.get('/studies/:id/target-sheets/:sheetId', requireAuth, sheetParams, async (req, res) => {
     res.json(await getTargetSheetById(ctx, userOf(req), String(req.params.id), String(req.params.sheetId)));
   });
-  router.put('/:sheetId', requireRole('engineer'), sheetParams, validate({ body: TargetSheetPutSchema }), async (req, res) => {
+  router.put('/studies/:id/target-sheets/:sheetId', requireRole('engineer'), sheetParams, validate({ body: TargetSheetPutSchema }), async (req, res) => {
     res.json(await putTargetSheetById(ctx, userOf(req), String(req.params.id), String(req.params.sheetId), req.body as TargetSheetPut));
   });
-  router.delete('/:sheetId', requireRole('engineer'), sheetParams, async (req, res) => {
+  router.delete('/studies/:id/target-sheets/:sheetId', requireRole('engineer'), sheetParams, async (req, res) => {
     await deleteTargetSheet(ctx, userOf(req), String(req.params.id), String(req.params.sheetId));
     res.status(204).end();
   });
@@ -63,7 +63,7 @@ export function studyTargetSheetsRouter(ctx: AppContext): Router {
 
 export function targetPresetsRouter(): Router {
   const router = Router();
-  router.get('/', requireAuth, (_req, res) => {
+  router.get('/target-presets', requireAuth, (_req, res) => {
     res.json(listPresets());
   });
   return router;

@@ -12,24 +12,24 @@ import { changeRole, getTeam, removeMember } from '../services/team-service.ts';
 export function teamRouter(ctx: AppContext): Router {
   const router = Router();
   const admin = requireRole('admin');
-  router.get('/', requireAuth, async (req, res) => {
+  router.get('/team', requireAuth, async (req, res) => {
     res.json(await getTeam(ctx, userOf(req)));
   });
-  router.patch('/members/:userId', admin, validate({ params: UserIdParams, body: RoleBody }), async (req, res) => {
+  router.patch('/team/members/:userId', admin, validate({ params: UserIdParams, body: RoleBody }), async (req, res) => {
     res.json(await changeRole(ctx, userOf(req), req.params.userId as string, (req.body as { role: TeamRole }).role));
   });
-  router.delete('/members/:userId', admin, validate({ params: UserIdParams }), async (req, res) => {
+  router.delete('/team/members/:userId', admin, validate({ params: UserIdParams }), async (req, res) => {
     await removeMember(ctx, userOf(req), req.params.userId as string);
     res.status(204).end();
   });
-  router.get('/invitations', admin, async (req, res) => {
+  router.get('/team/invitations', admin, async (req, res) => {
     res.json(await listInvitations(ctx, userOf(req)));
   });
-  router.post('/invitations', admin, validate({ body: InviteBody }), async (req, res) => {
+  router.post('/team/invitations', admin, validate({ body: InviteBody }), async (req, res) => {
     const body = req.body as { email: string; role: TeamRole };
     res.status(201).json(await inviteMember(ctx, userOf(req), body, linkBase(ctx.config, req)));
   });
-  router.delete('/invitations/:invitationId', admin, validate({ params: InvitationIdParams }), async (req, res) => {
+  router.delete('/team/invitations/:invitationId', admin, validate({ params: InvitationIdParams }), async (req, res) => {
     await revokeInvitation(ctx, userOf(req), req.params.invitationId as string);
     res.status(204).end();
   });
