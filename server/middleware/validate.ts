@@ -9,6 +9,19 @@ interface Schemas {
   params?: z.ZodType;
 }
 
+/** Which schema validate() checked each part of a request with, so parsed() can hand the value out typed. */
+const checkedWith = new WeakMap<Request, Schemas>();
+
+/**
+ * The value validate() parsed for one part of the request, typed by its schema: a handler reads
+ * `parsed(req, 'query', DesignsQuerySchema)` after `validate({ query: DesignsQuerySchema })` on the same route.
+ * Asking for a part with a schema that did not check it is a programming error and throws.
+ */
+export function parsed<S extends z.ZodType>(req: Request, part: keyof Schemas, schema: S): z.output<S> {
+  if (checkedWith.get(req)?.[part] !== schema) throw new Error(`parsed(${part}): this route did not validate ${part} with that schema`);
+  return (part === 'body' ? req.body : req[part]) as z.output<S>;
+}
+
 /**
  * A body nobody parsed (text/plain, or multipart on a JSON route) would otherwise read as `{}` and slip
  * through schemas whose fields are all optional; refuse it instead of acting on an empty request.
@@ -26,6 +39,7 @@ function unparsedBody(req: Request): ApiError | null {
  */
 export function validate(schemas: Schemas): RequestHandler {
   return (req, _res, next) => {
+    checkedWith.set(req, { ...checkedWith.get(req), ...schemas });
     if (schemas.body) {
       const refused = unparsedBody(req);
       if (refused) return next(refused);

@@ -4,7 +4,7 @@ import type { AppContext } from '../context.ts';
 import { singleUpload } from '../bench/upload.ts';
 import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts';
 import { heavyRequest, workSignal } from '../middleware/heavy-request.ts';
-import { validate } from '../middleware/validate.ts';
+import { parsed, validate } from '../middleware/validate.ts';
 import {
   calibrationFromFile,
   codesCsvFor,
@@ -21,7 +21,6 @@ import {
   CodesRequestSchema,
   ManualCodesRequestSchema,
   SquintRequestSchema,
-  type CodesCsvQuery,
   type CodesRequest,
   type ManualCodesRequest,
   type SquintRequest,
@@ -49,7 +48,7 @@ export function benchRouter(ctx: AppContext): Router {
     res.json(await codesFor(ctx, userOf(req), idOf(req), req.body as CodesRequest, workSignal(req)));
   });
   router.get('/candidates/:id/codes.csv', requireAuth, heavy, id, validate({ query: CodesCsvQuerySchema }), async (req, res) => {
-    const { csv, filename } = await codesCsvFor(ctx, userOf(req), idOf(req), req.query as unknown as CodesCsvQuery, workSignal(req));
+    const { csv, filename } = await codesCsvFor(ctx, userOf(req), idOf(req), parsed(req, 'query', CodesCsvQuerySchema), workSignal(req));
     res.type('text/csv').attachment(filename).send(csv);
   });
   router.get('/candidates/:id/calibration', requireAuth, id, async (req, res) => {

@@ -3,9 +3,9 @@ import { Router, type Request } from 'express';
 import { z } from 'zod';
 import type { AppContext } from '../context.ts';
 import { requireAuth, userOf } from '../middleware/require-auth.ts';
-import { validate } from '../middleware/validate.ts';
+import { parsed, validate } from '../middleware/validate.ts';
 import { renderPacketPdf } from '../packet/render-pdf.ts';
-import { buildPacket, type PacketOptions } from '../services/packet-service.ts';
+import { buildPacket } from '../services/packet-service.ts';
 import { IdParamsSchema } from '../../shared/schemas/study.ts';
 
 const id = validate({ params: IdParamsSchema });
@@ -24,10 +24,10 @@ const fileName = (name: string) => `${name.replace(/[^\w.-]+/g, '-').replace(/^-
 export function packetRouter(ctx: AppContext): Router {
   const router = Router();
   router.get('/studies/:id/packet', requireAuth, id, query, async (req, res) => {
-    res.json(await buildPacket(ctx, userOf(req), idOf(req), req.query as PacketOptions));
+    res.json(await buildPacket(ctx, userOf(req), idOf(req), parsed(req, 'query', PacketQuerySchema)));
   });
   router.get('/studies/:id/packet.pdf', requireAuth, id, query, async (req, res) => {
-    const data = await buildPacket(ctx, userOf(req), idOf(req), req.query as PacketOptions);
+    const data = await buildPacket(ctx, userOf(req), idOf(req), parsed(req, 'query', PacketQuerySchema));
     const pdf = await renderPacketPdf(data);
     res.type('application/pdf').set('Content-Disposition', `inline; filename="${fileName(data.study.name)}"`).send(pdf);
   });

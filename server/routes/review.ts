@@ -6,14 +6,13 @@ import { Router, type Request } from 'express';
 import { linkBase } from '../auth/links.ts';
 import type { AppContext } from '../context.ts';
 import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts';
-import { validate } from '../middleware/validate.ts';
+import { parsed, validate } from '../middleware/validate.ts';
 import { searchDesigns } from '../services/design-search.ts';
 import { answerReviewRequest, getStudyReview, requestReview, waitingFor } from '../services/review-request-service.ts';
 import {
   DesignSearchQuerySchema,
   ReviewAnswerSchema,
   ReviewRequestCreateSchema,
-  type DesignSearchQuery,
   type ReviewAnswer,
   type ReviewRequestCreate,
 } from '../../shared/schemas/review.ts';
@@ -40,7 +39,7 @@ export function reviewRouter(ctx: AppContext): Router {
   });
   // Every design of the study a reviewer can sign off: candidates and all designs of its finished sweeps.
   router.get('/studies/:id/design-search', requireAuth, id, validate({ query: DesignSearchQuerySchema }), async (req, res) => {
-    res.json(await searchDesigns(ctx, userOf(req), idOf(req), req.query as unknown as DesignSearchQuery));
+    res.json(await searchDesigns(ctx, userOf(req), idOf(req), parsed(req, 'query', DesignSearchQuerySchema)));
   });
   router.post('/review-requests/:id/answer', requireRole('reviewer'), id, validate({ body: ReviewAnswerSchema }), async (req, res) => {
     res.json(await answerReviewRequest(ctx, userOf(req), idOf(req), req.body as ReviewAnswer, linkBase(ctx.config, req)));

@@ -5,7 +5,7 @@
 import { Router, type Request } from 'express';
 import type { AppContext } from '../context.ts';
 import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts';
-import { validate } from '../middleware/validate.ts';
+import { parsed, validate } from '../middleware/validate.ts';
 import {
   createStudy,
   deleteStudy,
@@ -39,7 +39,7 @@ function exportFileName(name: string): string {
 export function studiesRouter(ctx: AppContext): Router {
   const router = Router();
   router.get('/studies', requireAuth, validate({ query: StudyListQuerySchema }), async (req, res) => {
-    res.json(await listStudies(ctx, userOf(req), req.query as unknown as { archived: boolean }));
+    res.json(await listStudies(ctx, userOf(req), parsed(req, 'query', StudyListQuerySchema)));
   });
   router.post('/studies', requireRole('engineer'), validate({ body: StudyCreateSchema }), async (req, res) => {
     res.status(201).json(await createStudy(ctx, userOf(req), req.body as StudyCreate));

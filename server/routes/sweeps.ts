@@ -3,19 +3,18 @@
  * cancel, and read results (points, design rows, CSV).
  */
 import { Router, type Request } from 'express';
-import { DesignsQuerySchema, PointsQuerySchema, SteerSpanQuerySchema, type ResultsQuery } from '../../shared/sweep/results-query.ts';
+import { DesignsQuerySchema, PointsQuerySchema, SteerSpanQuerySchema } from '../../shared/sweep/results-query.ts';
 import { SweepIdParamsSchema, SweepRequestSchema, type SweepRequest } from '../../shared/sweep/request.ts';
 import type { AppContext } from '../context.ts';
 import { eventStreamSlot, streamProgress } from '../sweeps/progress-stream.ts';
 import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts';
-import { validate } from '../middleware/validate.ts';
+import { parsed, validate } from '../middleware/validate.ts';
 import { listDesigns, listPoints, steerSpan, writePointsCsv } from '../services/sweep-results.ts';
 import { cachedPage, pageKey, sendPage, sweepStateFor } from '../services/sweep-page-cache.ts';
 import { cancelSweep, createSweep, findSweepFor, getSweep, listSweeps } from '../services/sweep-service.ts';
 
 const id = validate({ params: SweepIdParamsSchema });
 const idOf = (req: Request) => String(req.params.id);
-const queryOf = (req: Request) => req.query as unknown as ResultsQuery;
 
 export function sweepsRouter(ctx: AppContext): Router {
   const router = Router();
@@ -34,16 +33,18 @@ export function sweepsRouter(ctx: AppContext): Router {
   });
   // Pages of a finished sweep come from the page cache (access checked on every request; see sweep-page-cache.ts).
   router.get('/sweeps/:id/results', requireAuth, id, validate({ query: PointsQuerySchema }), async (req, res) => {
+    const query = parsed(req, 'query', PointsQuerySchema);
     const state = await sweepStateFor(ctx, userOf(req), idOf(req));
-    const page = await cachedPage(pageKey('points', state, JSON.stringify(queryOf(req))), async () =>
-      listPoints(ctx, await findSweepFor(ctx, userOf(req), idOf(req), 'read'), queryOf(req)),
+    const page = await cachedPage(pageKey('points', state, JSON.stringify(query)), async () =>
+      listPoints(ctx, await findSweepFor(ctx, userOf(req), idOf(req), 'read'), query),
     );
     sendPage(res, page);
   });
   router.get('/sweeps/:id/designs', requireAuth, id, validate({ query: DesignsQuerySchema }), async (req, res) => {
+    const query = parsed(req, 'query', DesignsQuerySchema);
     const state = await sweepStateFor(ctx, userOf(req), idOf(req));
-    const page = await cachedPage(pageKey('designs', state, JSON.stringify(queryOf(req))), async () =>
-      listDesigns(ctx, await findSweepFor(ctx, userOf(req), idOf(req), 'read'), queryOf(req)),
+    const page = await cachedPage(pageKey('designs', state, JSON.stringify(query)), async () =>
+      listDesigns(ctx, await findSweepFor(ctx, userOf(req), idOf(req), 'read'), query),
     );
     sendPage(res, page);
   });
