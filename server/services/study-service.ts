@@ -6,6 +6,7 @@ import type { EntityManager } from 'typeorm';
 import type { AuthUser } from '../auth/types.ts';
 import type { AppContext } from '../context.ts';
 import { Candidate } from '../entities/candidate.ts';
+import { StudyCostModel } from '../entities/cost-model.ts';
 import { Study } from '../entities/study.ts';
 import { TargetSheetRow } from '../entities/target-sheet.ts';
 import { findPreset } from '../../shared/targets/presets.ts';
@@ -184,6 +185,7 @@ export async function exportStudy(ctx: AppContext, user: AuthUser, studyId: stri
     targetSheet: sheet ? { preset: sheet.preset, sheet: sheet.sheet } : null,
     targetSheets: sheets.map((sh) => ({ preset: sh.preset, sheet: sh.sheet })),
     sweeps: await sweepDefinitions(m, studyId, sheetIndex),
+    costModel: (await m.getRepository(StudyCostModel).findOneBy({ studyId }))?.model ?? null,
   };
 }
 
@@ -215,6 +217,9 @@ export async function importStudy(ctx: AppContext, user: AuthUser, file: StudyEx
           targetSheetId: c.targetSheetIndex == null ? null : (sheetIds[c.targetSheetIndex] ?? null),
         })),
       );
+    }
+    if (file.costModel) {
+      await m.getRepository(StudyCostModel).insert({ studyId: study.id, model: file.costModel, version: 1, updatedBy: user.id });
     }
     return { study, candidateCount: file.candidates.length, sweeps: file.sweeps };
   });

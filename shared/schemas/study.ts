@@ -3,6 +3,7 @@
  * the client's forms and the import check, so a bad file names the same "field: rule" everywhere.
  */
 import { z } from 'zod';
+import { CostModelSchema } from '../cost/cost-model.ts';
 import { TargetSheetSchema } from '../targets/sheet.ts';
 import { DesignSchema } from './design.ts';
 
@@ -147,6 +148,8 @@ export const StudyExportSchema = z
         .max(50, 'must hold at most 50 sheets')
         .optional(),
       sweeps: z.array(SweepDefinitionSchema, { error: 'must be a list of sweep definitions' }).max(200).default([]),
+      /** The study's cost-and-power model, when it has one (older files have none). */
+      costModel: CostModelSchema.nullable().optional(),
     },
     { error: 'must be a Lobewise study file (a JSON object)' },
   )

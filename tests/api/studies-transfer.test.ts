@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { DEMO_COST_MODEL } from '../../shared/cost/index.ts';
 import { useApiTest } from '../helpers/app.ts';
 
 const api = useApiTest({ appPerFile: true, signIn: ['engineer', 'reviewer', 'outsider'] });
@@ -63,8 +64,23 @@ describe('POST /api/studies/import', () => {
     expect(again.study).toEqual(file.study);
     expect(again.candidates).toEqual(file.candidates);
     expect(again.targetSheet).toEqual(file.targetSheet);
+    expect(file.costModel).toBeNull();
+    expect(again.costModel).toBeNull();
     // The outsider's team now has its own copy; the original team's list is unchanged.
     expect((await api.engineer.get('/api/studies')).body).toHaveLength(1);
+  });
+
+  it('carries the cost-and-power model: the imported study prices with the same model', async () => {
+    const id = await studyWithContent();
+    const model = { ...DEMO_COST_MODEL, chipPrice: DEMO_COST_MODEL.chipPrice + 1.25 };
+    expect((await api.engineer.put(`/api/studies/${id}/cost-model`).send(model)).status).toBe(200);
+    const file = (await api.engineer.get(`/api/studies/${id}/export`)).body;
+    expect(file.costModel).toEqual(model);
+    const res = await api.outsider.post('/api/studies/import').send(file);
+    expect(res.status).toBe(201);
+    const imported = (await api.outsider.get(`/api/studies/${res.body.study.id}/cost-model`)).body;
+    expect(imported.model).toEqual(model);
+    expect(imported.version).toBe(1);
   });
 
   it('answers 400 naming the bad field and writes nothing', async () => {
