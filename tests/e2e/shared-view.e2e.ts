@@ -50,7 +50,10 @@ describe('a trade view kept in its URL', () => {
     await page.getByRole('heading', { name: studyName, level: 1 }).waitFor();
     expect(new URL(page.url()).pathname).toBe(`/studies/${studyId}`);
 
-    await page.getByRole('tab', { name: 'Trade table', exact: true }).first().click();
+    // Other journeys add small sweeps to the demo study; open the seeded one (the most designs) by its URL.
+    const sweeps = (await (await page.request.get(`${appUrl}/api/studies/${studyId}/sweeps`)).json()) as { id: string; designsTotal: number }[];
+    const demoSweep = sweeps.reduce((a, b) => (b.designsTotal > a.designsTotal ? b : a));
+    await page.goto(`${appUrl}/studies/${studyId}?sweep=${demoSweep.id}#trade`);
     await expect.poll(() => rowCount(page), { timeout: 20_000 }).toBeGreaterThan(10);
     await settle(page);
 
