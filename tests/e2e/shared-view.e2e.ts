@@ -50,7 +50,7 @@ describe('a trade view kept in its URL', () => {
     await page.getByRole('heading', { name: studyName, level: 1 }).waitFor();
     expect(new URL(page.url()).pathname).toBe(`/studies/${studyId}`);
 
-    // Other journeys add small sweeps to the demo study; open the seeded one (the most designs) by its URL.
+    // A journey may add small sweeps to the demo study; open the seeded one (the most designs) by its URL.
     const sweeps = (await (await page.request.get(`${appUrl}/api/studies/${studyId}/sweeps`)).json()) as { id: string; designsTotal: number }[];
     const demoSweep = sweeps.reduce((a, b) => (b.designsTotal > a.designsTotal ? b : a));
     await page.goto(`${appUrl}/studies/${studyId}?sweep=${demoSweep.id}#trade`);

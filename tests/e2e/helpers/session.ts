@@ -2,6 +2,7 @@
 import type { Page } from 'playwright-core';
 import { expect } from 'vitest';
 import { DEMO_USERS } from '../../../server/seed/accounts.ts';
+import { DEMO_STUDY_NAME } from '../../../server/seed/demo-study.ts';
 
 export type DemoRole = 'admin' | 'engineer' | 'reviewer';
 
@@ -43,11 +44,10 @@ export async function settle(page: Page, timeoutMs = 15_000): Promise<void> {
 }
 
 /** The demo study (the one with a finished sweep), found through the API with the page's own session. */
+/** The seeded demo study (journeys also make studies of their own, so it is found by its seeded name). */
 export async function demoStudyId(page: Page, appUrl: string): Promise<string> {
   const studies = (await (await page.request.get(`${appUrl}/api/studies`)).json()) as { id: string; name: string }[];
-  for (const s of studies) {
-    const sweeps = (await (await page.request.get(`${appUrl}/api/studies/${s.id}/sweeps`)).json()) as { status: string }[];
-    if (sweeps.some((w) => w.status === 'done')) return s.id;
-  }
-  throw new Error('no demo study with a finished sweep');
+  const demo = studies.find((s) => s.name === DEMO_STUDY_NAME);
+  if (!demo) throw new Error(`no demo study named "${DEMO_STUDY_NAME}"`);
+  return demo.id;
 }
