@@ -102,12 +102,6 @@ export async function getSweep(ctx: AppContext, user: AuthUser, sweepId: string)
   return progressOf(await findSweepFor(ctx, user, sweepId, 'read'));
 }
 
-/** Re-reads a sweep's progress (for the event stream, after access was checked once). */
-export async function reloadProgress(ctx: AppContext, sweepId: string): Promise<SweepProgress | null> {
-  const s = await ctx.db.getRepository(Sweep).findOneBy({ id: sweepId });
-  return s ? progressOf(s) : null;
-}
-
 /** Stops a queued or running sweep; results so far stay. 409 when it has already finished. */
 export async function cancelSweep(ctx: AppContext, user: AuthUser, sweepId: string): Promise<SweepProgress> {
   await findSweepFor(ctx, user, sweepId, 'edit');
