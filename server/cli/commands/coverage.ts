@@ -7,6 +7,7 @@ import { computeCoverage } from '../../../shared/coverage/index.ts';
 import { CoverageRequestSchema } from '../../../shared/schemas/coverage.ts';
 import { formatIssue } from '../../../shared/schemas/format-issue.ts';
 import { inlinePatternFiles } from '../pattern-files.ts';
+import { readJsonStdin } from '../read-json-stdin.ts';
 import { UsageError } from '../usage-error.ts';
 
 /** Pattern file paths in modules' table elements become their values; errors name the module's field. */
@@ -24,22 +25,9 @@ function inlineModulePatterns(body: unknown): unknown {
   return { ...body, modules };
 }
 
-async function readStdin(): Promise<string> {
-  const chunks: Buffer[] = [];
-  for await (const chunk of process.stdin) chunks.push(chunk as Buffer);
-  return Buffer.concat(chunks).toString('utf8');
-}
-
 export async function coverageCommand(argv: string[]): Promise<number> {
   if (argv.length > 0) throw new UsageError(`coverage takes no options (got "${argv[0]}"); pipe the request JSON on stdin`);
-  const text = await readStdin();
-  let body: unknown;
-  try {
-    body = JSON.parse(text);
-  } catch (err) {
-    const why = err instanceof Error ? err.message.split('\n')[0] : 'parse error';
-    throw new UsageError(`input: must be JSON (a coverage request {modules, region, percentiles}): ${why}`);
-  }
+  const body = await readJsonStdin('a coverage request {modules, region, percentiles}');
   const parsed = CoverageRequestSchema.safeParse(inlineModulePatterns(body));
   if (!parsed.success) throw new UsageError(formatIssue(parsed.error));
   parsed.data.modules.forEach((m, i) => {

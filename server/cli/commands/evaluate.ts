@@ -6,24 +6,12 @@ import { evaluateDesign } from '../../../shared/engine/index.ts';
 import { DesignOrListSchema } from '../../../shared/schemas/design.ts';
 import { formatIssue } from '../../../shared/schemas/format-issue.ts';
 import { assertPatternsGiven, inlinePatternFiles } from '../pattern-files.ts';
+import { readJsonStdin } from '../read-json-stdin.ts';
 import { UsageError } from '../usage-error.ts';
-
-async function readStdin(): Promise<string> {
-  const chunks: Buffer[] = [];
-  for await (const chunk of process.stdin) chunks.push(chunk as Buffer);
-  return Buffer.concat(chunks).toString('utf8');
-}
 
 export async function evaluateCommand(argv: string[]): Promise<number> {
   if (argv.length > 0) throw new UsageError(`evaluate takes no options (got "${argv[0]}"); pipe the design JSON on stdin`);
-  const text = await readStdin();
-  let body: unknown;
-  try {
-    body = JSON.parse(text);
-  } catch (err) {
-    const why = err instanceof Error ? err.message.split('\n')[0] : 'parse error';
-    throw new UsageError(`input: must be JSON (a design object or an array of them): ${why}`);
-  }
+  const body = await readJsonStdin('a design object or an array of them');
   const parsed = DesignOrListSchema.safeParse(inlinePatternFiles(body));
   if (!parsed.success) throw new UsageError(formatIssue(parsed.error));
   assertPatternsGiven(Array.isArray(parsed.data) ? parsed.data : [parsed.data], Array.isArray(parsed.data));
