@@ -4,7 +4,7 @@
  * driving four scenarios for a bounded time each: the signed-in `GET /api/me` (the cost of the stack itself),
  * trade-table design pages, per-point result pages and candidate evaluations. The load comes from a worker
  * thread (bench/load-driver.mjs), so the server's event loop is not also the load generator's. Prints requests
- * per second and p50/p95/p99 latency per scenario, then stops. `--profile DIR` writes a CPU profile of the
+ * per second and p50/p95/p99 latency per scenario (each after a 2 s warm-up that is not counted), then stops. `--profile DIR` writes a CPU profile of the
  * server's thread while the load runs (open it in Chrome DevTools or speedscope).
  */
 import { mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
@@ -17,6 +17,9 @@ import { startCluster } from '../server/db/cluster.ts';
 import { freePort } from '../server/db/free-port.ts';
 import { startServer } from '../server/index.ts';
 import { DEMO_USERS } from '../server/seed/accounts.ts';
+
+/** Seconds each scenario runs unmeasured before its measured run. */
+const WARMUP_SECONDS = 2;
 
 interface Session {
   cookie: string;
@@ -155,6 +158,9 @@ export async function run(argv: string[]): Promise<void> {
     }
     const rows = [];
     for (const s of scenarios) {
+      // A short unmeasured run first, so the scenario that happens to go first does not also pay for the JIT
+      // and the cold caches (common benchmarking practice).
+      await drive(server.url, sessions, s, connections, WARMUP_SECONDS);
       const cpu0 = serverThreadCpuMs();
       const row = await drive(server.url, sessions, s, connections, seconds);
       rows.push({ ...row, 'server CPU ms/req': +((serverThreadCpuMs() - cpu0) / Math.max(1, row.requests)).toFixed(2) });

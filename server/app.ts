@@ -13,6 +13,7 @@ import { errorHandler } from './middleware/error-handler.ts';
 import { serveClient } from './client-static.ts';
 import { authKit } from './auth/kit.ts';
 import { apiRouter } from './routes/index.ts';
+import { forgetReadAccessAfterWrites } from './services/read-access-cache.ts';
 
 export interface AppOptions {
   /** Folder of the built client to serve with an index.html fallback; omitted in API-only tests. */
@@ -38,6 +39,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}): Express {
   );
   app.use(pinoHttp({ logger: ctx.log, serializers: { req: scrubRequest }, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
   app.use(express.json({ limit: ctx.config.BODY_LIMIT }));
+  app.use('/api', forgetReadAccessAfterWrites(ctx));
   // Session, passport, API tokens and CSRF, before any API route.
   app.use('/api', authKit(ctx).middleware);
   app.use('/api', apiRouter(ctx));

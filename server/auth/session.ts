@@ -4,6 +4,7 @@ import session from 'express-session';
 import type { RequestHandler } from 'express';
 import type { AppContext } from '../context.ts';
 import { cacheSessions } from './session-cache.ts';
+import { forgetReadAccess } from '../services/read-access-cache.ts';
 import { forgetUser } from './user-cache.ts';
 
 export const SESSION_COOKIE = 'lobewise.sid';
@@ -18,6 +19,7 @@ const stores = new WeakMap<AppContext, ReturnType<typeof cacheSessions>>();
 export function forgetCachedUser(ctx: AppContext, userId: string): void {
   stores.get(ctx)?.forgetUser(userId);
   forgetUser(ctx, userId);
+  forgetReadAccess(ctx.db);
 }
 
 export function sessionMiddleware(ctx: AppContext, secret: string): RequestHandler {

@@ -62,6 +62,11 @@ export function errorHandler(log: Logger): ErrorRequestHandler {
         : err instanceof Error
           ? (fromBodyParser(err as BodyParserError) ?? fromPostgres(err as PgError))
           : null;
+    // Work stopped because its client went away (heavy-request.ts aborts it): nobody to answer, nothing broken.
+    if (err instanceof Error && err.name === 'AbortError' && res.destroyed) {
+      log.debug({ method: req.method, url: scrubUrl(req.originalUrl) }, 'work stopped: the client went away');
+      return;
+    }
     if (res.headersSent) {
       req.socket.destroy();
       return;

@@ -9,6 +9,7 @@ import { User } from '../entities/user.ts';
 import { Forbidden } from '../errors.ts';
 import { audit } from './audit-service.ts';
 import { findStudyFor } from './study-access.ts';
+import { forgetReadAccess } from './read-access-cache.ts';
 
 export interface SharesView {
   visibility: StudyVisibility;
@@ -76,5 +77,6 @@ export async function putShares(ctx: AppContext, owner: AuthUser, studyId: strin
       await audit(ctx, owner, before ? 'study.share_changed' : 'study.share_added', target, { userId, access, ...(before ? { from: before } : {}) }, m);
     }
   });
+  forgetReadAccess(ctx.db); // also when the owner's client left before the answer
   return sharesOf(ctx, study);
 }

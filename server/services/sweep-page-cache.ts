@@ -6,8 +6,9 @@
  * out of the bounded map. The scan-window recomputation and the JSON building then run once per page, not once
  * per request.
  *
- * Access is still checked on every request, by one query (`sweepStateFor`): the same rule as findStudyFor
- * (team, visibility, share), with the sweep's state read in the same round trip.
+ * Access is checked on every request (`sweepStateFor`): the same rule as findStudyFor (team, visibility, share),
+ * with the sweep's state read in the same round trip, and for a finished sweep the answer is kept a few seconds by
+ * read-access-cache.ts, which forgets it at once on any change made through this process.
  */
 import { createHash } from 'node:crypto';
 import type { Response } from 'express';
@@ -16,6 +17,7 @@ import type { AppContext } from '../context.ts';
 import type { ShareAccess } from '../entities/study-share.ts';
 import type { StudyVisibility } from '../entities/study.ts';
 import { NotFound } from '../errors.ts';
+import { cachedReadAccess } from './read-access-cache.ts';
 import { canRead } from './study-access.ts';
 
 const MAX_PAGES = 300;
@@ -29,7 +31,13 @@ export interface SweepState {
 }
 
 /** The sweep's state if `user` may read its study; NotFound('sweep') otherwise (ids never reveal what exists). */
-export async function sweepStateFor(ctx: AppContext, user: AuthUser, sweepId: string): Promise<SweepState> {
+export function sweepStateFor(ctx: AppContext, user: AuthUser, sweepId: string): Promise<SweepState> {
+  // The role is in the key because it is part of the rule; only a finished sweep's state stays still long enough.
+  const key = `sweep\u0000${user.id}\u0000${user.teamId}\u0000${user.role}\u0000${sweepId}`;
+  return cachedReadAccess(ctx, key, () => readSweepState(ctx, user, sweepId), (state) => state.status === 'done');
+}
+
+async function readSweepState(ctx: AppContext, user: AuthUser, sweepId: string): Promise<SweepState> {
   const [row] = (await ctx.db.query(
     `SELECT s.id, s.status, s.points_done AS "pointsDone", s.cost_model_version AS "costModelVersion",
        c.version AS "currentCostVersion", st.team_id AS "teamId", st.owner_id AS "ownerId", st.visibility, sh.access

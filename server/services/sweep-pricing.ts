@@ -12,6 +12,7 @@ import type { DataSource, EntityManager } from 'typeorm';
 import { CostModelSchema, type CostModel, type SweepCostBasis } from '../../shared/cost/cost-model.ts';
 import { designCostColumns } from '../../shared/sweep/design-cost.ts';
 import type { Logger } from 'pino';
+import { forgetReadAccess } from './read-access-cache.ts';
 
 export interface CurrentCostModel {
   model: CostModel;
@@ -117,6 +118,7 @@ async function repriceStale(db: DataSource, studyId: string): Promise<void> {
         return done;
       });
       if (next === 'superseded') return;
+      if (next === null) forgetReadAccess(db); // the sweep's state changed (its cost model version)
       after = next;
     }
   }

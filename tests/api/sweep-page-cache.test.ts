@@ -1,12 +1,14 @@
 /**
  * Trade-table pages of a finished sweep are served from the page cache (server/services/sweep-page-cache.ts):
- * access is still checked on every request, and a page reflects what the sweep's stored results are now.
+ * access is checked on every request (kept a few seconds by read-access-cache.ts, forgotten at once by any change
+ * made through the app), and a page reflects what the sweep's stored results are now.
  */
 import type { Express } from 'express';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { createApp } from '../../server/app.ts';
 import type { AppContext } from '../../server/context.ts';
 import { Study } from '../../server/entities/study.ts';
+import { ACCESS_TTL_MS } from '../../server/services/read-access-cache.ts';
 import { startSweepRunner, type SweepRunner } from '../../server/sweeps/runner.ts';
 import { authed, seedTeam, type AuthedClient } from '../helpers/auth.ts';
 import { openTestContext, truncateAll } from '../helpers/db.ts';
@@ -16,6 +18,7 @@ let runner: SweepRunner;
 let app: Express;
 let owner: AuthedClient;
 let teammate: AuthedClient;
+let teammateId: string;
 let outsider: AuthedClient;
 let studyId: string;
 let sweepId: string;
@@ -33,6 +36,7 @@ beforeAll(async () => {
   const other = await seedTeam(ctx.db);
   owner = await authed(app, team.engineer);
   teammate = await authed(app, team.admin);
+  teammateId = team.admin.id;
   outsider = await authed(app, other.engineer);
   studyId = (await ctx.db.getRepository(Study).save({ teamId: team.team.id, ownerId: team.engineer.id, name: 'Cached pages' })).id;
   const res = await owner.post(`/api/studies/${studyId}/sweeps`).send({ name: 'small', grid: GRID });
@@ -69,12 +73,34 @@ describe('cached trade-table pages', () => {
     expect((await outsider.get(points)).body.error.code).toBe('not_found');
   });
 
-  it('stop at once for a teammate when the owner makes the study private', async () => {
+  it('stop at once for a teammate when the owner makes the study private, and again when a share is removed', async () => {
     const url = `/api/sweeps/${sweepId}/designs?limit=10`;
+    const shares = `/api/studies/${studyId}/shares`;
     expect((await teammate.get(url)).status).toBe(200);
-    // Straight in the database, as no route may be in the way: visibility is read on every request.
-    await ctx.db.query(`UPDATE studies SET visibility = 'private' WHERE id = $1`, [studyId]);
+    expect((await teammate.get(url)).status).toBe(200); // now answered from the read-access cache
+    expect((await owner.put(shares).send({ visibility: 'private', shares: [] })).status).toBe(200);
     expect((await teammate.get(url)).status).toBe(404);
     expect((await owner.get(url)).status).toBe(200);
+    expect((await owner.put(shares).send({ visibility: 'private', shares: [{ userId: teammateId, access: 'viewer' }] })).status).toBe(200);
+    expect((await teammate.get(url)).status).toBe(200);
+    expect((await teammate.get(`/api/sweeps/${sweepId}/results?limit=10`)).status).toBe(200);
+    expect((await owner.put(shares).send({ visibility: 'private', shares: [] })).status).toBe(200);
+    expect((await teammate.get(url)).status).toBe(404);
+    expect((await teammate.get(`/api/sweeps/${sweepId}/results?limit=10`)).status).toBe(404);
   });
+
+  it('see a change made outside this process (straight in the database) within ACCESS_TTL_MS', async () => {
+    const url = `/api/sweeps/${sweepId}/designs?limit=10`;
+    await ctx.db.query(`UPDATE studies SET visibility = 'team' WHERE id = $1`, [studyId]);
+    expect((await teammate.get(url)).status).toBe(200);
+    await ctx.db.query(`UPDATE studies SET visibility = 'private' WHERE id = $1`, [studyId]);
+    const changedAt = Date.now();
+    let status = 200;
+    while (status === 200 && Date.now() - changedAt < ACCESS_TTL_MS + 2_000) {
+      await new Promise((r) => setTimeout(r, 250));
+      status = (await teammate.get(url)).status;
+    }
+    expect(status).toBe(404);
+    expect(Date.now() - changedAt).toBeLessThan(ACCESS_TTL_MS + 1_000);
+  }, 20_000);
 });
