@@ -43,7 +43,6 @@ export async function settle(page: Page, timeoutMs = 15_000): Promise<void> {
   await page.waitForTimeout(300);
 }
 
-/** The demo study (the one with a finished sweep), found through the API with the page's own session. */
 /** The seeded demo study (journeys also make studies of their own, so it is found by its seeded name). */
 export async function demoStudyId(page: Page, appUrl: string): Promise<string> {
   const studies = (await (await page.request.get(`${appUrl}/api/studies`)).json()) as { id: string; name: string }[];
