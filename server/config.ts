@@ -28,7 +28,7 @@ const EnvSchema = z.object({
   /** Monte Carlo runs with more trials than this are split over the request pool's threads (smaller: one task). */
   MONTE_CARLO_SPLIT_TRIALS: z.coerce.number().int().min(1).default(200),
   /** Largest work one request may ask for, in element·samples (see shared/compute/pattern-work.ts). */
-  REQUEST_WORK_BUDGET: z.coerce.number().min(1e5).max(1e12).default(5e8),
+  REQUEST_WORK_BUDGET: z.coerce.number().min(1e5).max(1e12).default(1e9),
   /** Heavy requests (evaluate, bench maths) one user may have running at once; more answer 429. */
   HEAVY_REQUESTS_PER_USER: z.coerce.number().int().min(1).max(64).default(2),
   /** Sweep progress streams (server-sent events) one user may have open at once; more answer 429. */

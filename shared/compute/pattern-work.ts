@@ -2,7 +2,9 @@
  * The work budget's unit: element·samples, one array element summed at one pattern direction. One pattern
  * evaluation (peak search, two cuts, directivity) samples about PATTERN_SAMPLES directions for each element;
  * small arrays cost at least ELEMENT_FLOOR elements' worth (fixed overhead per pattern). Measured on this
- * engine at roughly 20–40 ns per element·sample on one core, so 5e8 is about 10–20 s of one thread.
+ * engine on the project's machine, quiet: 3–7 ns per element·sample (bench codes on 64×64 about 3.4 ns, an 8×8
+ * evaluation about 7 ns), two to three times that when the cores are busy; so the default budget of 1e9 is
+ * about 3–7 s of one thread (an 11 × 11 beam codebook of a 64×64 panel just fits), up to about 20 s under load.
  */
 export const PATTERN_SAMPLES = 2000;
 export const ELEMENT_FLOOR = 64;
