@@ -1,4 +1,6 @@
+import type { AddressInfo } from 'node:net';
 import express from 'express';
+import { pino } from 'pino';
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
 import { z } from 'zod';
@@ -85,6 +87,44 @@ describe('errorHandler', () => {
     // A transaction whose connection died mid-way fails at commit with TypeORM's released-runner error.
     const released = Object.assign(new Error('Query runner already released. Cannot run queries anymore.'), { name: 'QueryRunnerAlreadyReleasedError' });
     expect((await request(appWith([() => { throw released; }])).post('/thing').send({})).status).toBe(503);
+  });
+});
+
+describe('work stopped because its client went away', () => {
+  it('is not logged as an unhandled error, while other errors still are', async () => {
+    const lines: { level: number; msg: string }[] = [];
+    const captured = pino({ level: 'debug' }, { write: (line: string) => void lines.push(JSON.parse(line)) });
+    let thrown!: () => void;
+    const settled = new Promise<void>((resolve) => (thrown = resolve));
+    const app = express();
+    app.post('/work', (req, res, next) => {
+      // As heavy-request.ts does: the client's leaving aborts the work, whose promise rejects with an AbortError.
+      res.once('close', () => {
+        next(Object.assign(new Error('The task has been aborted'), { name: 'AbortError' }));
+        thrown();
+      });
+    });
+    app.post('/broken', () => {
+      throw new Error('a real bug');
+    });
+    app.use(errorHandler(captured));
+    const server = app.listen(0, '127.0.0.1');
+    await new Promise((r) => server.once('listening', r));
+    const url = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+    try {
+      const gone = new AbortController();
+      const answer = fetch(`${url}/work`, { method: 'POST', signal: gone.signal }).catch((e: unknown) => e);
+      await new Promise((r) => setTimeout(r, 100));
+      gone.abort();
+      await answer;
+      await settled;
+      expect((await fetch(`${url}/broken`, { method: 'POST' })).status).toBe(500);
+    } finally {
+      server.close();
+    }
+    const errors = lines.filter((l) => l.level >= 50).map((l) => l.msg);
+    expect(errors).toEqual(['unhandled error']); // the bug only
+    expect(lines.some((l) => l.level === 20 && /client went away/.test(l.msg))).toBe(true);
   });
 });
 
