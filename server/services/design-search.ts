@@ -94,13 +94,13 @@ export async function searchDesigns(ctx: AppContext, user: AuthUser, studyId: st
       const description = designLabel(c.design as Design);
       return {
         key: `candidate:${c.id}`, kind: 'candidate', design: c.design as Design, label: `Candidate “${c.name}”: ${description}`,
-        designIndex: null, sweep: null, candidate: { id: c.id, name: c.name }, description,
+        designIndex: null, sweep: null, candidate: { id: c.id, name: c.name }, description, targetSheetId: c.targetSheetId ?? null,
       };
     }),
     ...rows.map((r): DesignSearchHit => ({
       key: `sweep:${r.sweep_id}:${r.design_index}`, kind: 'sweep', design: `${r.sweep_id}:${r.design_index}`,
       label: sweepDesignLabel(r.sweep_name, r.design_index, r.design), designIndex: r.design_index,
-      sweep: { id: r.sweep_id, name: r.sweep_name }, candidate: null, description: designLabel(r.design),
+      sweep: { id: r.sweep_id, name: r.sweep_name }, candidate: null, description: designLabel(r.design), targetSheetId: null,
     })),
   ];
   return { hits, total };

@@ -247,6 +247,8 @@ export interface DesignSearchHit {
   candidate: { id: string; name: string } | null;
   /** The short description alone (shared/trade/design-label.ts). */
   description: string;
+  /** A candidate's own target sheet, which its sign-off is judged against; null: the sweep's (or the study's first). */
+  targetSheetId: string | null;
 }
 
 export interface DesignSearchResult {

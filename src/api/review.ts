@@ -15,8 +15,8 @@ export const reviewApi = {
   waiting: () => api.get<WaitingRequest[]>('/api/review-requests/waiting'),
   searchDesigns: (studyId: string, q: string, limit: number) =>
     api.get<DesignSearchResult>(`${study(studyId)}/design-search?${new URLSearchParams({ q, limit: String(limit) })}`),
-  checkDesign: (studyId: string, design: DecisionCreateInput['design'], label?: string) =>
-    api.post<DecisionPreviewRow>(`${study(studyId)}/decisions/check`, { design, ...(label ? { label } : {}) }),
+  checkDesign: (studyId: string, design: DecisionCreateInput['design'], label?: string, targetSheetId?: string) =>
+    api.post<DecisionPreviewRow>(`${study(studyId)}/decisions/check`, { design, ...(label ? { label } : {}), ...(targetSheetId ? { targetSheetId } : {}) }),
   decide: (studyId: string, input: DecisionCreateInput) => api.post<DecisionRow>(`${study(studyId)}/decisions`, input),
   sign: (decisionId: string) => api.patch<void>(`/api/decisions/${encodeURIComponent(decisionId)}`, { sign: true }),
   deleteDraft: (decisionId: string) => api.delete<void>(`/api/decisions/${encodeURIComponent(decisionId)}`),

@@ -101,8 +101,8 @@ export const useReviewStore = defineStore('review', () => {
     return reviewApi.searchDesigns(forStudy, q, limit);
   }
 
-  async function checkDesign(forStudy: string, design: DecisionCreateInput['design'], label?: string): Promise<DecisionPreviewRow> {
-    return reviewApi.checkDesign(forStudy, design, label);
+  async function checkDesign(forStudy: string, design: DecisionCreateInput['design'], label?: string, targetSheetId?: string): Promise<DecisionPreviewRow> {
+    return reviewApi.checkDesign(forStudy, design, label, targetSheetId);
   }
 
   async function decide(input: DecisionCreateInput): Promise<DecisionRow> {

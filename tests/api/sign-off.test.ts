@@ -99,6 +99,23 @@ describe('GET /api/studies/:id/design-search', () => {
     expect(sameParams[0]!.description).toMatch(/^4×1, 5.35 mm pitch/);
   });
 
+  it("hands out a candidate's own target sheet, which the sign-off check then judges it against", async () => {
+    const sheet = await api.engineer
+      .post(`/api/studies/${studyId}/target-sheets`)
+      .send({ preset: null, sheet: { name: 'Lab build, tiny aperture', maxApertureXMm: 5 } })
+      .expect(201);
+    const design = { ...EDGE_MODULE, nx: 4, dxMm: 5.35 };
+    const own = await api.engineer.post(`/api/studies/${studyId}/candidates`).send({ name: 'Lab module', design, targetSheetId: sheet.body.id }).expect(201);
+    const plain = await api.engineer.post(`/api/studies/${studyId}/candidates`).send({ name: 'Plain module', design }).expect(201);
+    const hits = (await search('module')).hits as (Hit & { targetSheetId: string | null })[];
+    expect(hits.find((h) => h.key === `candidate:${own.body.id}`)!.targetSheetId).toBe(sheet.body.id);
+    expect(hits.find((h) => h.key === `candidate:${plain.body.id}`)!.targetSheetId).toBeNull();
+    // The form sends it; the check then judges against that sheet (its 5 mm aperture limit fails a 4 × 5.35 mm row).
+    const checked = await api.reviewer.post(`/api/studies/${studyId}/decisions/check`).send({ design, targetSheetId: sheet.body.id }).expect(200);
+    expect(checked.body.targetSheetId).toBe(sheet.body.id);
+    expect(checked.body.failedLimits).toContain('maxApertureXMm');
+  });
+
   it('answers 400 naming the field for a bad limit and 404 for another team', async () => {
     const bad = await api.reviewer.get(`/api/studies/${studyId}/design-search`).query({ q: '3', limit: 500 });
     expect(bad.status).toBe(400);

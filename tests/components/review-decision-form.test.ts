@@ -13,24 +13,27 @@ beforeEach(() => {
 
 const design = { frequencyGHz: 28, nx: 8, ny: 1, dxMm: 5.35, channelPowerDbm: 10 };
 const SWEEP_ID = '0f8fad5b-d9cb-469f-a165-70867728950e';
+/** The candidate's own target sheet (not the study's first). */
+const SHEET_ID = '7c9e6679-7425-40de-944b-e07fc1f90ae7';
 const hits: DesignSearchHit[] = [
-  { key: 'candidate:1', kind: 'candidate', design, label: 'Candidate “Edge module B”: 8×1, 5.35 mm pitch', designIndex: null, sweep: null, candidate: { id: '1', name: 'Edge module B' }, description: '8×1' },
-  { key: `sweep:${SWEEP_ID}:33`, kind: 'sweep', design: `${SWEEP_ID}:33`, label: 'Design #33 of “Pitch sweep”: 4×1', designIndex: 33, sweep: { id: SWEEP_ID, name: 'Pitch sweep' }, candidate: null, description: '4×1' },
+  { key: 'candidate:1', kind: 'candidate', design, label: 'Candidate “Edge module B”: 8×1, 5.35 mm pitch', designIndex: null, sweep: null, candidate: { id: '1', name: 'Edge module B' }, description: '8×1', targetSheetId: SHEET_ID },
+  { key: `sweep:${SWEEP_ID}:33`, kind: 'sweep', design: `${SWEEP_ID}:33`, label: 'Design #33 of “Pitch sweep”: 4×1', designIndex: 33, sweep: { id: SWEEP_ID, name: 'Pitch sweep' }, candidate: null, description: '4×1', targetSheetId: null },
 ];
 
 /** A fake of the server's search (what the form asked for is recorded) and of its check, failing `failed` limits. */
 function fakes(failed: string[] = []) {
   const asked: string[] = [];
+  const checkedAgainst: (string | undefined)[] = [];
   const search = async (q: string): Promise<DesignSearchResult> => {
     asked.push(q);
     return { hits, total: 1 };
   };
-  const check = async (d: unknown, label?: string) =>
-    ({
+  const check = async (d: unknown, label?: string, targetSheetId?: string) =>
+    (checkedAgainst.push(targetSheetId), {
       label: label ?? '?', design: d, metrics: { at: null, axis: 'az', points: [], figures: { peakEirpDbm: 24, edgeEirpDbm: 20, worstSllDb: -12, channels: 8 }, basis: 'azimuth -45° to 45°' },
       targetSheetId: 's', targetSheet: { name: 'Handset 28 GHz' }, check: null, failedLimits: failed,
     }) as never;
-  return { asked, search, check };
+  return { asked, checkedAgainst, search, check };
 }
 
 const mountForm = (f = fakes()) => mount(DecisionForm, { props: { search: f.search, check: f.check }, global: { plugins: [Antd] }, attachTo: document.body });
@@ -72,10 +75,13 @@ describe('DecisionForm', () => {
     expect(w.find('[data-test="submit"]').text()).toBe('Save draft');
     await w.find('form').trigger('submit');
     expect(w.emitted('submit')![0]![0]).toMatchObject({ design: `${SWEEP_ID}:33`, sign: false, alternatives: [] });
+    // A sweep design is judged against its sweep's sheet, which the server knows from the id.
+    expect(w.emitted('submit')![0]![0]).not.toHaveProperty('targetSheetId');
   });
 
   it('signs only after the dialog, which names the design and the limits it fails, and needs a justification then', async () => {
-    const w = mountForm(fakes(['maxApertureXMm']));
+    const f = fakes(['maxApertureXMm']);
+    const w = mountForm(f);
     await choose(w, 'candidate:1');
     await w.find('[data-test="rationale"]').setValue('Fewest channels at the edge EIRP.');
     await w.find('[data-test="add-alternative"]').trigger('click');
@@ -85,6 +91,7 @@ describe('DecisionForm', () => {
     await w.find('form').trigger('submit');
     await flushPromises();
     expect(w.emitted('submit')).toBeUndefined();
+    expect(f.checkedAgainst).toEqual([SHEET_ID]); // the candidate's own sheet
     const dialog = document.querySelector('.sign-off-dialog')!;
     expect(dialog.textContent).toContain('Candidate “Edge module B”');
     expect(dialog.textContent).toContain('Fails 1 limit of Handset 28 GHz');
@@ -100,6 +107,7 @@ describe('DecisionForm', () => {
     expect(w.emitted('submit')![0]![0]).toEqual({
       design,
       label: 'Candidate “Edge module B”: 8×1, 5.35 mm pitch',
+      targetSheetId: SHEET_ID,
       rationale: 'Fewest channels at the edge EIRP.',
       alternatives: [{ label: 'Edge module A', reason: 'misses edge EIRP' }],
       sign: true,
