@@ -32,7 +32,7 @@ export function packetOrder(a: Judged, b: Judged): number {
 export interface PacketSweepDesign {
   rank: number;
   designIndex: number;
-  /** "<sweep name> · design #<index>", the index as the trade table's "Design #" column shows it. */
+  /** "Design #<index> of “<sweep name>”", leading with the number as decisions and the design search do. */
   label: string;
   params: Pick<TradeParams, 'nx' | 'ny' | 'dxMm' | 'dyMm' | 'phaseBits' | 'grouping'> & { taper: string };
   /** The parameters in one line, as the PDF and the printable page print them. */
@@ -177,7 +177,7 @@ export async function rankLatestSweep(
     rows: top.map(({ row, verdict }, i) => ({
       rank: i + 1,
       designIndex: row.designIndex,
-      label: `${sweep.name} · design #${row.designIndex}`,
+      label: `Design #${row.designIndex} of “${sweep.name}”`,
       params: {
         nx: row.params.nx, ny: row.params.ny, dxMm: row.params.dxMm, dyMm: row.params.dyMm,
         taper: taperText(row.params), phaseBits: row.params.phaseBits, grouping: row.params.grouping,

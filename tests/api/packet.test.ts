@@ -173,10 +173,11 @@ describe('the packet ranks the latest finished sweep', () => {
     expect(text).toContain(`"${sweepName}"`);
     expect(text).toContain('3 designs in the sweep, 1 passing the target sheet');
     const at = (label: string) => text.indexOf(label);
-    const first = `${sweepName} · design #${four}`;
-    expect(at(first)).toBeGreaterThan(-1);
-    expect(at(first)).toBeLessThan(at(`${sweepName} · design #${two}`));
-    expect(at(`${sweepName} · design #${two}`)).toBeLessThan(at(`${sweepName} · design #${six}`));
+    const label = (n: number) => `Design #${n} of “${sweepName}”`;
+    expect(json.sweepRanked.rows.map((r: { label: string }) => r.label)).toEqual([label(four), label(two), label(six)]);
+    expect(at(label(four))).toBeGreaterThan(-1);
+    expect(at(label(four))).toBeLessThan(at(label(two)));
+    expect(at(label(two))).toBeLessThan(at(label(six)));
     expect(text).toContain('4 × 1, pitch 5.35 × 5.35 mm, uniform taper, 6-bit phase, element grouping');
     expect(text).not.toContain('Older edge sweep');
     expect(text).toContain('Edge module A (6 elements)');
