@@ -37,6 +37,8 @@ describe('devices', () => {
     expect(await page.locator('[data-test="coverage-cdf"] [data-test="requirement-line"]').count()).toBe(1);
     expect(await page.locator('[data-test="coverage-cdf"] [data-test="percentile-marker"]').count()).toBe(3);
     expect(await page.locator('[data-test="coverage-map"] rect').count()).toBeGreaterThan(1000);
+    // Two edge modules leave directions behind the phone unserved: said in words, not as about −300 dBm.
+    expect(await page.locator('[data-test="coverage-min"]').innerText()).toBe('below -50 dBm (directions no beam serves)');
     // The clicked button keeps its hover and focus colours; judge the page at rest, as every other page is.
     await page.mouse.move(0, 0);
     await page.evaluate(() => (document.activeElement as HTMLElement | null)?.blur());
