@@ -1,6 +1,6 @@
 /**
  * Piscina worker thread for request-sized work (evaluate, bench codes, typed codes, beam squint, Monte Carlo
- * chunks): the main thread validated the input and checked its work budget; here the engine runs, away from
+ * chunks, range-data analysis): the main thread validated the input and checked its work budget; here the engine runs, away from
  * the event loop. Bench input failures come back as data (an Error's class does not survive the thread boundary).
  */
 import { beamSquint } from '../shared/bench/beam-squint.ts';
@@ -8,6 +8,7 @@ import { BenchInputError } from '../shared/bench/bench-input-error.ts';
 import { offsetArrays } from '../shared/bench/calibration.ts';
 import { codesTable } from '../shared/bench/codes-table.ts';
 import { manualCodesPattern } from '../shared/bench/manual-codes.ts';
+import { rangeAnalysis } from '../shared/bench/range-analysis.ts';
 import { MonteCarloChunkSchema } from '../shared/bench/monte-carlo-chunk.ts';
 import { idealBeam, monteCarloTrials } from '../shared/bench/monte-carlo-trials.ts';
 import { evaluateDesign } from '../shared/engine/index.ts';
@@ -36,6 +37,8 @@ function run(task: RequestTask): unknown {
     }
     case 'scan-design':
       return scanDesign(task.design, task.sheet);
+    case 'range-analysis':
+      return rangeAnalysis(task.design, task.text, task.beam, task.calibration);
     case 'monte-carlo': {
       const chunk = MonteCarloChunkSchema.parse(task.chunk);
       return monteCarloTrials(chunk.design, chunk.options, chunk.ideal, chunk.start, chunk.count);

@@ -8,17 +8,14 @@ import { Calibration } from '../entities/calibration.ts';
 import { RangeUpload } from '../entities/range-upload.ts';
 import { ApiError } from '../errors.ts';
 import { audit } from './audit-service.ts';
-import { benchCall, benchDesign } from './bench-service.ts';
+import { benchDesign } from './bench-service.ts';
 import { candidateFor } from './candidate-service.ts';
 import { findInStudy, findStudyFor } from './study-access.ts';
 import type { RangeUploadFields } from '../../shared/bench/api-schemas.ts';
-import { analyseMeasurement } from '../../shared/bench/analyse-measurement.ts';
-import { beamCodes } from '../../shared/bench/beam-codes.ts';
-import { offsetArrays } from '../../shared/bench/calibration.ts';
 import { decodeText } from '../../shared/bench/decode-text.ts';
 import { DelimitedParseError } from '../../shared/bench/delimited-parse-error.ts';
-import { parseRangeCsv } from '../../shared/bench/parse-range-csv.ts';
-import { channelCount } from '../../shared/schemas/design.ts';
+import type { RangeAnalysis } from '../../shared/bench/range-analysis.ts';
+import { runRequestTask } from '../compute/request-pool.ts';
 
 export interface UploadedFile {
   originalname: string;
@@ -35,6 +32,9 @@ function storageError(err: unknown): ApiError | null {
   if (code === '42501' || code === 'EACCES' || code === 'EPERM') return new ApiError(500, 'storage_permission', 'the server may not write this upload (a permission problem); nothing was saved — ask an admin');
   return null;
 }
+
+/** A file that is not range data: 400 naming the file, with the line and the reason. */
+const invalidFile = (message: string) => new ApiError(400, 'invalid_file', `file: ${message}`, [{ field: 'file', message }]);
 
 function summary(u: RangeUpload) {
   return {
@@ -56,21 +56,21 @@ export async function createRangeUpload(ctx: AppContext, user: AuthUser, candida
   const candidate = await candidateFor(ctx, user, candidateId, 'edit');
   if (!file) throw new ApiError(400, 'invalid_input', 'file: is required (a CSV of angle and power)', [{ field: 'file', message: 'is required (a CSV of angle and power)' }]);
   const design = await benchDesign(ctx, candidate);
-  let parsed;
+  let text: string;
   try {
-    parsed = parseRangeCsv(decodeText(file.buffer));
+    text = decodeText(file.buffer);
   } catch (err) {
-    if (err instanceof DelimitedParseError) throw new ApiError(400, 'invalid_file', `file: ${err.message}`, [{ field: 'file', message: err.message }]);
+    if (err instanceof DelimitedParseError) throw invalidFile(err.message);
     throw err;
   }
   const stored = await ctx.db.getRepository(Calibration).findOneBy({ candidateId });
-  const channels = channelCount(design.grouping, design.nx, design.ny);
-  const { beam, analysis } = benchCall(() => {
-    const offsets = stored && stored.offsets.length > 0 ? offsetArrays(stored.offsets, channels) : undefined;
-    const b = { azDeg: fields.azDeg, elDeg: fields.elDeg };
-    const codes = fields.codes ?? beamCodes(design, b, offsets);
-    return { beam: { ...b, codes }, analysis: analyseMeasurement(design, { ...b, codes }, parsed, offsets) };
-  });
+  // Parsing and the comparison run on the request pool, off the event loop; a bad beam or codes field is a 400 from there.
+  const outcome = await runRequestTask<RangeAnalysis>(
+    { kind: 'range-analysis', design, text, beam: { azDeg: fields.azDeg, elDeg: fields.elDeg, codes: fields.codes }, calibration: stored?.offsets ?? null },
+    { threads: ctx.config.SWEEP_THREADS },
+  );
+  if (!outcome.ok) throw invalidFile(outcome.parseError);
+  const { parsed, beam, analysis } = outcome;
   const repo = ctx.db.getRepository(RangeUpload);
   let saved: RangeUpload;
   try {

@@ -13,7 +13,8 @@ export type RequestTask =
   | { kind: 'squint'; design: Design; beam: Beam; band: { lowGHz: number; highGHz: number; points: number }; calibration: Calibration | null }
   | { kind: 'monte-carlo-ideal'; design: Design; options: MonteCarloOptions }
   | { kind: 'monte-carlo'; chunk: MonteCarloChunk }
-  | { kind: 'scan-design'; design: Design; sheet: TargetSheet | null };
+  | { kind: 'scan-design'; design: Design; sheet: TargetSheet | null }
+  | { kind: 'range-analysis'; design: Design; text: string; beam: { azDeg: number; elDeg: number; codes?: number[] | null }; calibration: Calibration | null };
 
 /** A result, or a bench input failure naming its field and rule. */
 export type RequestTaskResult = { ok: true; value: unknown } | { ok: false; field: string; rule: string };
