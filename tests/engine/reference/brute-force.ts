@@ -5,6 +5,7 @@
  */
 import type { Design } from '../../../shared/schemas/design.ts';
 import { taperWeights } from '../../../shared/engine/taper/taper-weights.ts';
+import type { ElementPattern } from '../../../shared/schemas/element-pattern.ts';
 
 const C = 299792458;
 const D2R = Math.PI / 180;
@@ -23,9 +24,40 @@ export interface RefArray {
   axes?: { x: number[]; xr: number[]; xi: number[]; y: number[]; yr: number[]; yi: number[] };
 }
 
+/**
+ * A table element's linear power at (az, el), written out again: bilinear in az and el between the four grid values
+ * around the direction (linear power, not dB), the azimuth axis wrapping when it spans the circle, elevations clamped
+ * to the grid, nothing outside the azimuths it covers.
+ */
+function refTable(p: ElementPattern): (azDeg: number, elDeg: number) => number {
+  const nAz = p.azDeg.length;
+  const nEl = p.elDeg.length;
+  const stepAz = (p.azDeg[nAz - 1]! - p.azDeg[0]!) / (nAz - 1);
+  const stepEl = (p.elDeg[nEl - 1]! - p.elDeg[0]!) / (nEl - 1);
+  const wraps = Math.abs(nAz * stepAz - 360) < 1e-6;
+  const lin = p.gainDbi.map((g) => 10 ** (g / 10));
+  const at = (i: number, j: number) => lin[j * nAz + i]!;
+  return (az, el) => {
+    let fa = (az - p.azDeg[0]!) / stepAz;
+    if (wraps) fa = ((fa % nAz) + nAz) % nAz;
+    else if (fa < -1e-9 || fa > nAz - 1 + 1e-9) return 0;
+    const fe = Math.min(Math.max((el - p.elDeg[0]!) / stepEl, 0), nEl - 1);
+    const i0 = wraps ? Math.floor(fa) % nAz : Math.min(Math.max(Math.floor(fa), 0), nAz - 2);
+    const i1 = wraps ? (i0 + 1) % nAz : i0 + 1;
+    const j0 = Math.min(Math.floor(fe), nEl - 2);
+    const w = Math.min(Math.max(fa - i0, 0), 1);
+    const v = fe - j0;
+    return (1 - w) * (1 - v) * at(i0, j0) + w * (1 - v) * at(i1, j0) + (1 - w) * v * at(i0, j0 + 1) + w * v * at(i1, j0 + 1);
+  };
+}
+
 export function refElement(design: Design): (azDeg: number, elDeg: number) => number {
   const e = design.element;
   if (e.kind === 'isotropic') return () => 1;
+  if (e.kind === 'table') {
+    if (!e.pattern) throw new Error('the reference needs the table element with its values');
+    return refTable(e.pattern);
+  }
   if (e.kind === 'cosine') {
     return (az, el) => {
       const c = Math.cos(az * D2R) * Math.cos(el * D2R);
@@ -380,6 +412,7 @@ function refElementGainDbi(design: Design): number {
   if (e.gainDbi !== undefined) return e.gainDbi;
   if (e.kind === 'cosine') return 10 * Math.log10(2 * (e.q + 1));
   if (e.kind === 'tr38901') return 8;
+  if (e.kind === 'table') return 10 * Math.log10(refTable(e.pattern!)(0, 0));
   return 0;
 }
 
