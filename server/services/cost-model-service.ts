@@ -6,6 +6,7 @@ import type { CostModel, CostModelView } from '../../shared/cost/cost-model.ts';
 import { touchStudy } from './study-service.ts';
 import { findStudyFor } from './study-access.ts';
 import { INLINE_REPRICE_DESIGNS, repriceStudySweeps, scheduleReprice, storedDesigns } from './sweep-pricing.ts';
+import { forgetReadAccess } from './read-access-cache.ts';
 
 function view(studyId: string, row: StudyCostModel | null): CostModelView {
   return {
@@ -47,6 +48,7 @@ export async function putCostModel(
     await touchStudy(m, studyId);
     return { ...view(studyId, row), repricedSweeps, repricing: !inline };
   });
+  forgetReadAccess(ctx.db); // the study's sweeps now answer to a new cost model version
   if (saved.repricing) void scheduleReprice(ctx.db, ctx.log, studyId, true);
   return saved;
 }

@@ -66,7 +66,9 @@ async function repriceBatch(m: EntityManager, sweepId: string, after: number, mo
     `UPDATE sweep_designs d SET beamformer_chips = v."beamformerChips", cost_usd = v."costUsd", dc_power_w = v."dcPowerW",
        heat_w_per_cm2 = v."heatWPerCm2"
      FROM jsonb_to_recordset($2::jsonb) AS v(design_index integer, "beamformerChips" integer, "costUsd" float8, "dcPowerW" float8, "heatWPerCm2" float8)
-     WHERE d.sweep_id = $1 AND d.design_index = v.design_index`,
+     WHERE d.sweep_id = $1 AND d.design_index = v.design_index
+       -- An unchanged row is not rewritten: every sort index of the table would get a new entry for it.
+       AND (d.beamformer_chips, d.cost_usd, d.dc_power_w, d.heat_w_per_cm2) IS DISTINCT FROM (v."beamformerChips", v."costUsd", v."dcPowerW", v."heatWPerCm2")`,
     [sweepId, JSON.stringify(priced)],
   );
   return rows.length < BATCH ? null : rows[rows.length - 1]!.design_index;
