@@ -3,9 +3,9 @@ import { Router, type Request } from 'express';
 import { linkBase } from '../auth/links.ts';
 import type { AppContext } from '../context.ts';
 import { requireAuth, userOf } from '../middleware/require-auth.ts';
-import { validate } from '../middleware/validate.ts';
+import { parsed, validate } from '../middleware/validate.ts';
 import { createComment, getComment, listComments } from '../services/comment-service.ts';
-import { CommentCreateSchema, type CommentCreate } from '../../shared/schemas/review.ts';
+import { CommentCreateSchema } from '../../shared/schemas/review.ts';
 import { IdParamsSchema } from '../../shared/schemas/study.ts';
 
 const id = validate({ params: IdParamsSchema });
@@ -17,7 +17,7 @@ export function commentsRouter(ctx: AppContext): Router {
     res.json(await listComments(ctx, userOf(req), idOf(req)));
   });
   router.post('/studies/:id/comments', requireAuth, id, validate({ body: CommentCreateSchema }), async (req, res) => {
-    res.status(201).json(await createComment(ctx, userOf(req), idOf(req), req.body as CommentCreate, linkBase(ctx.config, req)));
+    res.status(201).json(await createComment(ctx, userOf(req), idOf(req), parsed(req, 'body', CommentCreateSchema), linkBase(ctx.config, req)));
   });
   router.get('/comments/:id', requireAuth, id, async (req, res) => {
     res.json(await getComment(ctx, userOf(req), idOf(req)));

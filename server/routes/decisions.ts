@@ -3,16 +3,9 @@ import { Router, type Request } from 'express';
 import { linkBase } from '../auth/links.ts';
 import type { AppContext } from '../context.ts';
 import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts';
-import { validate } from '../middleware/validate.ts';
+import { parsed, validate } from '../middleware/validate.ts';
 import { createDecision, deleteDecision, getDecision, listDecisions, patchDecision, previewDecision } from '../services/decision-service.ts';
-import {
-  DecisionCheckSchema,
-  DecisionCreateSchema,
-  DecisionPatchSchema,
-  type DecisionCheck,
-  type DecisionCreate,
-  type DecisionPatch,
-} from '../../shared/schemas/review.ts';
+import { DecisionCheckSchema, DecisionCreateSchema, DecisionPatchSchema } from '../../shared/schemas/review.ts';
 import { IdParamsSchema } from '../../shared/schemas/study.ts';
 
 const id = validate({ params: IdParamsSchema });
@@ -25,18 +18,18 @@ export function decisionsRouter(ctx: AppContext): Router {
     res.json(await listDecisions(ctx, userOf(req), idOf(req)));
   });
   router.post('/studies/:id/decisions', requireAuth, reviewer, id, validate({ body: DecisionCreateSchema }), async (req, res) => {
-    res.status(201).json(await createDecision(ctx, userOf(req), idOf(req), req.body as DecisionCreate, linkBase(ctx.config, req)));
+    res.status(201).json(await createDecision(ctx, userOf(req), idOf(req), parsed(req, 'body', DecisionCreateSchema), linkBase(ctx.config, req)));
   });
   // Writes nothing: the sign-off dialog shows the design, its figures and the limits it fails before anyone signs.
   router.post('/studies/:id/decisions/check', requireAuth, reviewer, id, validate({ body: DecisionCheckSchema }), async (req, res) => {
-    res.json(await previewDecision(ctx, userOf(req), idOf(req), req.body as DecisionCheck));
+    res.json(await previewDecision(ctx, userOf(req), idOf(req), parsed(req, 'body', DecisionCheckSchema)));
   });
   router.get('/decisions/:id', requireAuth, id, async (req, res) => {
     res.json(await getDecision(ctx, userOf(req), idOf(req)));
   });
   // No role gate here: a signed decision answers 409 to everyone; the service then limits drafts to their author.
   router.patch('/decisions/:id', requireAuth, id, validate({ body: DecisionPatchSchema }), async (req, res) => {
-    res.json(await patchDecision(ctx, userOf(req), idOf(req), req.body as DecisionPatch, linkBase(ctx.config, req)));
+    res.json(await patchDecision(ctx, userOf(req), idOf(req), parsed(req, 'body', DecisionPatchSchema), linkBase(ctx.config, req)));
   });
   router.delete('/decisions/:id', requireAuth, id, async (req, res) => {
     await deleteDecision(ctx, userOf(req), idOf(req));

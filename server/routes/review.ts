@@ -9,13 +9,7 @@ import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts'
 import { parsed, validate } from '../middleware/validate.ts';
 import { searchDesigns } from '../services/design-search.ts';
 import { answerReviewRequest, getStudyReview, requestReview, waitingFor } from '../services/review-request-service.ts';
-import {
-  DesignSearchQuerySchema,
-  ReviewAnswerSchema,
-  ReviewRequestCreateSchema,
-  type ReviewAnswer,
-  type ReviewRequestCreate,
-} from '../../shared/schemas/review.ts';
+import { DesignSearchQuerySchema, ReviewAnswerSchema, ReviewRequestCreateSchema } from '../../shared/schemas/review.ts';
 import { IdParamsSchema } from '../../shared/schemas/study.ts';
 import { commentsRouter } from './comments.ts';
 import { decisionsRouter } from './decisions.ts';
@@ -30,7 +24,7 @@ export function reviewRouter(ctx: AppContext): Router {
     res.json(await getStudyReview(ctx, userOf(req), idOf(req)));
   });
   router.post('/studies/:id/review-requests', requireRole('engineer'), id, validate({ body: ReviewRequestCreateSchema }), async (req, res) => {
-    const body = req.body as ReviewRequestCreate;
+    const body = parsed(req, 'body', ReviewRequestCreateSchema);
     res.status(201).json(await requestReview(ctx, userOf(req), idOf(req), body, linkBase(ctx.config, req)));
   });
   // The signed-in member's open requests (the studies page's "waiting for me" list and the header's count).
@@ -42,7 +36,7 @@ export function reviewRouter(ctx: AppContext): Router {
     res.json(await searchDesigns(ctx, userOf(req), idOf(req), parsed(req, 'query', DesignSearchQuerySchema)));
   });
   router.post('/review-requests/:id/answer', requireRole('reviewer'), id, validate({ body: ReviewAnswerSchema }), async (req, res) => {
-    res.json(await answerReviewRequest(ctx, userOf(req), idOf(req), req.body as ReviewAnswer, linkBase(ctx.config, req)));
+    res.json(await answerReviewRequest(ctx, userOf(req), idOf(req), parsed(req, 'body', ReviewAnswerSchema), linkBase(ctx.config, req)));
   });
   router.use(commentsRouter(ctx));
   router.use(decisionsRouter(ctx));

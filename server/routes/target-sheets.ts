@@ -5,7 +5,7 @@
 import { Router } from 'express';
 import type { AppContext } from '../context.ts';
 import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts';
-import { validate } from '../middleware/validate.ts';
+import { parsed, validate } from '../middleware/validate.ts';
 import {
   createTargetSheet,
   deleteTargetSheet,
@@ -16,13 +16,7 @@ import {
   putTargetSheet,
   putTargetSheetById,
 } from '../services/target-sheet-service.ts';
-import {
-  IdParamsSchema,
-  SheetParamsSchema,
-  TargetSheetCreateSchema,
-  TargetSheetPutSchema,
-  type TargetSheetPut,
-} from '../../shared/schemas/study.ts';
+import { IdParamsSchema, SheetParamsSchema, TargetSheetCreateSchema, TargetSheetPutSchema } from '../../shared/schemas/study.ts';
 
 const id = validate({ params: IdParamsSchema });
 const sheetParams = validate({ params: SheetParamsSchema });
@@ -34,7 +28,7 @@ export function studyTargetSheetRouter(ctx: AppContext): Router {
     res.json(await getTargetSheet(ctx, userOf(req), String(req.params.id)));
   });
   router.put('/studies/:id/target-sheet', requireRole('engineer'), id, validate({ body: TargetSheetPutSchema }), async (req, res) => {
-    res.json(await putTargetSheet(ctx, userOf(req), String(req.params.id), req.body as TargetSheetPut));
+    res.json(await putTargetSheet(ctx, userOf(req), String(req.params.id), parsed(req, 'body', TargetSheetPutSchema)));
   });
   return router;
 }
@@ -46,13 +40,13 @@ export function studyTargetSheetsRouter(ctx: AppContext): Router {
     res.json(await listTargetSheets(ctx, userOf(req), String(req.params.id)));
   });
   router.post('/studies/:id/target-sheets', requireRole('engineer'), id, validate({ body: TargetSheetCreateSchema }), async (req, res) => {
-    res.status(201).json(await createTargetSheet(ctx, userOf(req), String(req.params.id), req.body as TargetSheetPut));
+    res.status(201).json(await createTargetSheet(ctx, userOf(req), String(req.params.id), parsed(req, 'body', TargetSheetCreateSchema)));
   });
   router.get('/studies/:id/target-sheets/:sheetId', requireAuth, sheetParams, async (req, res) => {
     res.json(await getTargetSheetById(ctx, userOf(req), String(req.params.id), String(req.params.sheetId)));
   });
   router.put('/studies/:id/target-sheets/:sheetId', requireRole('engineer'), sheetParams, validate({ body: TargetSheetPutSchema }), async (req, res) => {
-    res.json(await putTargetSheetById(ctx, userOf(req), String(req.params.id), String(req.params.sheetId), req.body as TargetSheetPut));
+    res.json(await putTargetSheetById(ctx, userOf(req), String(req.params.id), String(req.params.sheetId), parsed(req, 'body', TargetSheetPutSchema)));
   });
   router.delete('/studies/:id/target-sheets/:sheetId', requireRole('engineer'), sheetParams, async (req, res) => {
     await deleteTargetSheet(ctx, userOf(req), String(req.params.id), String(req.params.sheetId));
