@@ -8,6 +8,7 @@ const benches: Record<string, () => Promise<{ run: (argv: string[]) => Promise<v
   password: () => import('./password.ts'),
   health: () => import('./health.ts'),
   coverage: () => import('./coverage.ts'),
+  'device-sweep': () => import('./device-sweep.ts'),
   pages: () => import('./pages.ts'),
   lighthouse: () => import('./lighthouse.ts'),
   cli: () => import('./cli.ts'),

@@ -7,7 +7,6 @@ import type { AddressInfo } from 'node:net';
 import { createApp } from './app.ts';
 import { destroyMonteCarloPool } from './bench/monte-carlo-pool.ts';
 import { destroyCoveragePool } from './coverage/coverage-pool.ts';
-import { destroyDeviceSweepPool } from './devices/device-sweep-pool.ts';
 import { loadConfig, type Config } from './config.ts';
 import type { AppContext } from './context.ts';
 import { openDatabase, type Database } from './db/database.ts';
@@ -64,7 +63,6 @@ export async function startServer(
       await ctx.sweeps?.stop();
       await destroyMonteCarloPool();
       await destroyCoveragePool();
-      await destroyDeviceSweepPool();
       await mail.close();
       await database.close();
     })());

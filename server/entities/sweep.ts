@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import type { DeviceSweepSpec } from '../../shared/devices/device-sweep-spec.ts';
 
 export const SWEEP_STATUSES = ['queued', 'running', 'done', 'failed', 'cancelled'] as const;
 export type SweepStatus = (typeof SWEEP_STATUSES)[number];
@@ -19,8 +20,13 @@ export class Sweep {
   @Column({ type: 'text' })
   name!: string;
 
-  @Column({ type: 'jsonb' })
-  grid!: Record<string, unknown>;
+  /** The grid of designs; null for a sweep over a device (then `device` says what varies). */
+  @Column({ type: 'jsonb', nullable: true })
+  grid!: Record<string, unknown> | null;
+
+  /** A sweep over a device: the frozen inputs its worker threads compute (shared/devices/device-sweep-spec.ts). */
+  @Column({ type: 'jsonb', nullable: true })
+  device!: DeviceSweepSpec | null;
 
   @Column({ type: 'jsonb', default: {} })
   constraints!: Record<string, unknown>;

@@ -134,7 +134,8 @@ export async function rankLatestSweep(
   const [sweep] = chosen
     ? [chosen]
     : ((await m.query(
-        `SELECT id, name, finished_at, target_sheet_id FROM sweeps WHERE study_id = $1 AND status = 'done'
+        // The ranking is of module designs over their steering; a device sweep's rows are coverage figures.
+        `SELECT id, name, finished_at, target_sheet_id FROM sweeps WHERE study_id = $1 AND status = 'done' AND device IS NULL
           ORDER BY finished_at DESC NULLS LAST, created_at DESC LIMIT 1`,
         [studyId],
       )) as SweepRow[]);

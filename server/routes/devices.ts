@@ -1,12 +1,11 @@
-/** Devices: the list and create under /api/studies/:id/devices, one device under /api/devices/:id. */
+/** Devices: the list and create under /api/studies/:id/devices, one device under /api/devices/:id, and sweeps over one. */
 import { Router, type Request } from 'express';
 import type { AppContext } from '../context.ts';
 import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts';
-import { validate } from '../middleware/validate.ts';
-import { createDevice, deleteDevice, getDevice, listDevices, patchDevice, sweepDevice } from '../services/device-service.ts';
-import { deviceSweepQueueFull } from '../devices/device-sweep-pool.ts';
-import { ApiError } from '../errors.ts';
-import { DeviceSweepRequestSchema, type DeviceSweepRequest } from '../../shared/devices/device-sweep.ts';
+import { parsed, validate } from '../middleware/validate.ts';
+import { createDevice, deleteDevice, getDevice, listDevices, patchDevice } from '../services/device-service.ts';
+import { createDeviceSweep } from '../services/device-sweep-service.ts';
+import { DeviceSweepRequestSchema } from '../../shared/devices/device-sweep.ts';
 import { DeviceCreateSchema, DevicePatchSchema, type DeviceCreate, type DevicePatch } from '../../shared/schemas/device.ts';
 import { IdParamsSchema } from '../../shared/schemas/study.ts';
 
@@ -33,18 +32,9 @@ export function devicesRouter(ctx: AppContext): Router {
   router.patch('/devices/:id', requireRole('engineer'), id, validate({ body: DevicePatchSchema }), async (req, res) => {
     res.json(await patchDevice(ctx, userOf(req), idOf(req), req.body as DevicePatch));
   });
-  // Reading is enough: a sweep stores nothing, it answers the variants' coverage rows.
-  router.post('/devices/:id/sweep', requireAuth, id, validate({ body: DeviceSweepRequestSchema }), async (req, res) => {
-    if (deviceSweepQueueFull()) throw new ApiError(503, 'busy', 'sweep: too many device computations waiting; try again shortly');
-    const abort = new AbortController();
-    res.on('close', () => {
-      if (!res.writableEnded) abort.abort();
-    });
-    try {
-      res.json(await sweepDevice(ctx, userOf(req), idOf(req), req.body as DeviceSweepRequest, abort.signal));
-    } catch (err) {
-      if (!abort.signal.aborted) throw err;
-    }
+  // A stored sweep in the device's study, run by the sweep runner like any sweep (progress, cancel, results: /api/sweeps/:id).
+  router.post('/devices/:id/sweeps', requireRole('engineer'), id, validate({ body: DeviceSweepRequestSchema }), async (req, res) => {
+    res.status(201).json(await createDeviceSweep(ctx, userOf(req), idOf(req), parsed(req, 'body', DeviceSweepRequestSchema)));
   });
   router.delete('/devices/:id', requireRole('engineer'), id, async (req, res) => {
     await deleteDevice(ctx, userOf(req), idOf(req));

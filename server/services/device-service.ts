@@ -6,16 +6,10 @@ import { Candidate } from '../entities/candidate.ts';
 import { Device } from '../entities/device.ts';
 import { invalidInput } from '../errors.ts';
 import type { DeviceCreate, DeviceLayout, DevicePatch } from '../../shared/schemas/device.ts';
-import { DesignSchema, type Design } from '../../shared/schemas/design.ts';
-import { deviceRegion } from '../../shared/devices/device-region.ts';
-import type { DeviceSweepAnswer } from '../../shared/api/devices.ts';
-import { deviceSweepVariants, type DeviceSweepRequest } from '../../shared/devices/device-sweep.ts';
-import { runDeviceVariant } from '../devices/device-sweep-pool.ts';
-import { resolveElementPatterns } from './element-pattern-service.ts';
 import { audit } from './audit-service.ts';
 import { touchStudy } from './study-service.ts';
 import { findInStudy, findStudyFor } from './study-access.ts';
-import { assertSheetOfStudy, sheetFor, sheetName } from './target-sheet-service.ts';
+import { assertSheetOfStudy } from './target-sheet-service.ts';
 
 /** 400 naming the module whose candidate is not one of the study's. */
 async function assertCandidatesOfStudy(m: EntityManager, studyId: string, layout: DeviceLayout | undefined): Promise<void> {
@@ -46,7 +40,8 @@ export async function createDevice(ctx: AppContext, user: AuthUser, studyId: str
   });
 }
 
-const deviceFor = (ctx: AppContext, user: AuthUser, id: string, need: 'read' | 'edit') =>
+/** The device if the user may `need` its study; another team's device is "not found". */
+export const deviceFor = (ctx: AppContext, user: AuthUser, id: string, need: 'read' | 'edit') =>
   findInStudy(ctx, user, 'device', need, () => ctx.db.getRepository(Device).findOneBy({ id }));
 
 export async function getDevice(ctx: AppContext, user: AuthUser, id: string): Promise<Device> {
@@ -78,61 +73,3 @@ export async function designsOf(m: EntityManager, studyId: string, layout: Devic
   const rows = await m.getRepository(Candidate).findBy(layout.modules.map((x) => ({ id: x.candidateId, studyId })));
   return Object.fromEntries(rows.map((r) => [r.id, r.design]));
 }
-
-/**
- * A sweep over the device: every variant of one module's candidate (values from `request.vary`), each variant's
- * coverage on the device-sweep thread pool, judged against the device's sheet. Rows in variant order.
- */
-export async function sweepDevice(ctx: AppContext, user: AuthUser, id: string, request: DeviceSweepRequest, signal?: AbortSignal): Promise<DeviceSweepResult> {
-  const { row } = await deviceFor(ctx, user, id, 'read');
-  const layout = row.layout;
-  const target = layout.modules[request.moduleIndex];
-  if (!target) throw invalidInput([{ field: 'moduleIndex', message: `must name a module of the device (0 to ${layout.modules.length - 1})` }]);
-  const sheetRow = await sheetFor(ctx.db.manager, row.studyId, row.targetSheetId);
-  const sheet = sheetRow?.sheet ?? null;
-  const stored = await designsOf(ctx.db.manager, row.studyId, layout);
-  const parsed: Record<string, Design> = {};
-  for (const [i, m] of layout.modules.entries()) {
-    const p = DesignSchema.safeParse(stored[m.candidateId]);
-    if (!p.success) throw invalidInput([{ field: `layout.modules[${i}].candidateId`, message: 'names a candidate that is gone or no longer valid' }]);
-    parsed[m.candidateId] = p.data;
-  }
-  for (const [i, m] of layout.modules.entries()) {
-    if (parsed[m.candidateId]!.channelPowerDbm === null && i !== request.moduleIndex) {
-      throw invalidInput([{ field: `layout.modules[${i}].candidateId`, message: 'names a candidate without channelPowerDbm (coverage needs the power per channel)' }]);
-    }
-  }
-  let variants;
-  try {
-    variants = deviceSweepVariants(parsed[target.candidateId]!, request.vary);
-  } catch (err) {
-    throw invalidInput([{ field: (err as { field?: string }).field ?? 'vary', message: (err as Error).message }]);
-  }
-  // Table elements carry only their pattern id in the study; the threads need the values.
-  const baseDesigns = await resolveElementPatterns(ctx, { studyId: row.studyId }, Object.values(parsed));
-  const resolved = Object.fromEntries(Object.keys(parsed).map((k, i) => [k, baseDesigns[i]!]));
-  const variantDesigns = await resolveElementPatterns(ctx, { studyId: row.studyId }, variants.map((v) => v.design));
-  // The varied module gets its own key, so other modules using the same candidate stay as they are.
-  const VARIANT = '00000000-0000-4000-8000-00000000ffff';
-  const variantLayout = { ...layout, modules: layout.modules.map((m, i) => (i === request.moduleIndex ? { ...m, candidateId: VARIANT } : m)) };
-  for (const [index, v] of variants.entries()) {
-    if (v.design.channelPowerDbm === null) {
-      throw invalidInput([{ field: 'vary.channelPowerDbm', message: `must be given: variant ${index + 1}'s candidate has no power per channel` }]);
-    }
-  }
-  const rows = await Promise.all(
-    variants.map((v, index) =>
-      runDeviceVariant({ index, params: v.params, input: { layout: variantLayout, designs: { ...resolved, [VARIANT]: variantDesigns[index]! }, sheet } }, signal).catch(
-        (err: unknown) => {
-          // The engine's own "field: rule" (a variant the coverage schema refuses) is the caller's input, not a fault.
-          const m = /^([\w.[\]]+): (.+)$/.exec(err instanceof Error ? err.message : '');
-          throw m ? invalidInput([{ field: m[1]!.replace(`layout.modules[${request.moduleIndex}]`, 'vary'), message: `${m[2]} (variant ${index + 1})` }]) : err;
-        },
-      ),
-    ),
-  );
-  return { deviceId: row.id, moduleIndex: request.moduleIndex, sheetName: sheetRow ? sheetName(sheetRow) : null, region: deviceRegion(sheet).kind, rows };
-}
-
-/** POST /api/devices/:id/sweep answers the shape the client reads (shared/api/devices.ts). */
-export type DeviceSweepResult = DeviceSweepAnswer;

@@ -29,10 +29,11 @@ export async function listPoints(ctx: AppContext, sweep: Sweep, q: ResultsQuery)
 
 const select = (cols: ColumnDef[]) => cols.map((c) => `${c.column} AS "${c.field}"`).join(', ');
 
-/** Design rows; with a scan window (q.scanAz / q.scanEl) their figures cover only the points steered inside it. */
+/** Design rows; with a scan window (q.scanAz / q.scanEl) a grid sweep's figures cover only the points steered inside it. */
 export async function listDesigns(ctx: AppContext, sweep: Sweep, q: ResultsQuery): Promise<DesignsPage> {
   const { where, order, params } = buildQuery(sweep.id, q, DESIGN_COLUMNS, 'design_index');
-  const windowed = q.scanAz || q.scanEl;
+  // A device sweep's rows are coverage over the sheet's region: no steering to window.
+  const windowed = !sweep.device && (q.scanAz || q.scanEl);
   const prefix = windowed ? windowedDesignsCte(q.scanAz, q.scanEl, params) : '';
   const source = windowed ? 'windowed' : 'sweep_designs';
   const [{ total }] = (await ctx.db.query(`${prefix}SELECT count(*)::int AS total FROM ${source} WHERE ${where}`, params)) as [{ total: number }];

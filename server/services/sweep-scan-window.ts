@@ -4,7 +4,7 @@
  * Designs with no point inside the window have no row. The result is a CTE named `windowed` with the columns
  * of sweep_designs, so the usual WHERE and ORDER BY of sweep-query.ts apply to it unchanged.
  */
-import { DESIGN_COST_COLUMNS, DESIGN_PARAM_COLUMNS, DESIGN_SUMMARY_COLUMNS } from '../../shared/sweep/columns.ts';
+import { DESIGN_COST_COLUMNS, DESIGN_COVERAGE_COLUMNS, DESIGN_PARAM_COLUMNS, DESIGN_SUMMARY_COLUMNS } from '../../shared/sweep/columns.ts';
 import type { ScanWindow } from '../../shared/sweep/results-query.ts';
 
 /** Same tolerances as the summary and the candidate preview: 59.9999999° still counts as 60°. */
@@ -83,7 +83,7 @@ export function windowedDesignsCte(az: ScanWindow | null | undefined, el: ScanWi
     ), windowed AS (
       SELECT d.sweep_id, d.design_index, ${DESIGN_PARAM_COLUMNS.map((c) => `d.${c.column}`).join(', ')}, d.design,
         ${DESIGN_SUMMARY_COLUMNS.map((c) => `ws.${c.column}`).join(', ')},
-        ${DESIGN_COST_COLUMNS.map((c) => `d.${c.column}`).join(', ')}
+        ${[...DESIGN_COST_COLUMNS, ...DESIGN_COVERAGE_COLUMNS].map((c) => `d.${c.column}`).join(', ')}
       FROM sweep_designs d JOIN ws ON ws.design_index = d.design_index WHERE d.sweep_id = $1
     ) `;
 }

@@ -2,6 +2,7 @@
  * Sweeps of a study: start (rows for the sweep and its chunks; the runner queues them), progress, cancel.
  * Results and CSV live in sweep-results.ts. Access always goes through the study (findStudyFor).
  */
+import { aboutDeviceSweep } from '../../shared/devices/device-sweep-spec.ts';
 import { ENGINE_VERSION } from '../../shared/engine/index.ts';
 import { TARGET_CHUNK_POINTS } from '../../shared/sweep/chunks.ts';
 import { GridTooLarge, compileGrid } from '../../shared/sweep/grid.ts';
@@ -39,6 +40,7 @@ export function progressOf(s: Sweep, now = Date.now()): SweepProgress {
     engineVersion: s.engineVersion,
     error: s.error,
     targetSheetId: s.targetSheetId,
+    device: s.device ? aboutDeviceSweep(s.device) : null,
     createdAt: s.createdAt,
     startedAt: s.startedAt,
     finishedAt: s.finishedAt,

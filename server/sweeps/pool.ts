@@ -14,6 +14,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { Piscina } from 'piscina';
+import type { DeviceSweepChunk } from '../../shared/devices/device-sweep-spec.ts';
 import type { PointResult, SweepChunk } from '../../shared/sweep/chunk.ts';
 
 export const DEFAULT_WORKER_FILE = fileURLToPath(new URL('../../workers/sweep.ts', import.meta.url));
@@ -23,6 +24,8 @@ export interface SweepPool {
   readonly threads: number;
   /** Evaluates one chunk; retries when the thread running it crashes. */
   run(chunk: SweepChunk): Promise<PointResult[]>;
+  /** Computes variants of a device sweep (one coverage each), with the same retries. */
+  runDevice(chunk: Omit<DeviceSweepChunk, 'kind'>): Promise<PointResult[]>;
   /** Evaluates one chunk into its `cli sweep` JSON lines (one string; cheap to pass between threads). */
   runLines(chunk: SweepChunk): Promise<string>;
   /** Attempts that failed and were retried, for logs and tests. */
@@ -124,7 +127,7 @@ export function createSweepPool(options: { threads?: number; filename?: string; 
     execArgv: workerExecArgv(bundle !== null),
   });
   let retries = 0;
-  const attempt = async (chunk: SweepChunk): Promise<unknown> => {
+  const attempt = async (chunk: SweepChunk | DeviceSweepChunk): Promise<unknown> => {
     for (let attempt = 1; ; attempt++) {
       try {
         return await piscina.run(chunk);
@@ -138,6 +141,7 @@ export function createSweepPool(options: { threads?: number; filename?: string; 
   return {
     threads,
     run: async (chunk) => (await attempt({ ...chunk, output: 'rows' })) as PointResult[],
+    runDevice: async (chunk) => (await attempt({ ...chunk, kind: 'device' })) as PointResult[],
     runLines: async (chunk) => (await attempt({ ...chunk, output: 'lines' })) as string,
     get retries() {
       return retries;

@@ -2,7 +2,7 @@
 import type { Design } from '../../shared/schemas/design.ts';
 import type { PointResult } from '../../shared/sweep/chunk.ts';
 import type { CostModel } from '../../shared/cost/cost-model.ts';
-import { DESIGN_PARAM_COLUMNS, DESIGN_SUMMARY_COLUMNS, METRIC_COLUMNS, STEER_COLUMNS, paramValue } from '../../shared/sweep/columns.ts';
+import { DESIGN_COVERAGE_COLUMNS, DESIGN_PARAM_COLUMNS, DESIGN_SUMMARY_COLUMNS, METRIC_COLUMNS, STEER_COLUMNS, paramValue } from '../../shared/sweep/columns.ts';
 import { designCostColumns } from '../../shared/sweep/design-cost.ts';
 import { summariseDesign } from '../../shared/sweep/design-summary.ts';
 
@@ -77,6 +77,21 @@ export function designRows(sweepId: string, points: PointResult[], costModel: Co
     const summary = summariseDesign(list);
     for (const c of DESIGN_SUMMARY_COLUMNS) row[c.column] = finite(summary[c.field] ?? null);
     costColumns(design, list, summary, costModel, row);
+    return row;
+  });
+}
+
+/**
+ * One row per variant of a device sweep (one point each): the variant's parameters and its coverage figures
+ * (peak EIRP in the design's peak_eirp_dbm, beside the 50th percentile, the sector minimum and the beams).
+ */
+export function deviceDesignRows(sweepId: string, points: PointResult[]): Row[] {
+  return points.map((p) => {
+    const { steerAzDeg: _az, steerElDeg: _el, ...design } = p.design;
+    const row: Row = { sweep_id: sweepId, design_index: p.designIndex, design, angles: 1, points_failed: p.error === null ? 0 : 1 };
+    params(p.design, row);
+    row.peak_eirp_dbm = finite(p.metrics?.peakEirpDbm ?? null);
+    for (const c of DESIGN_COVERAGE_COLUMNS) row[c.column] = finite(p.metrics?.[c.field] ?? null);
     return row;
   });
 }

@@ -9,6 +9,7 @@ import pg from 'pg';
 import PgBoss from 'pg-boss';
 import type { Logger } from 'pino';
 import type { DataSource } from 'typeorm';
+import type { DeviceSweepSpec } from '../../shared/devices/device-sweep-spec.ts';
 import type { SweepConstraints, SweepGridShape } from '../../shared/sweep/grid-schema.ts';
 import { createSweepPool, type SweepPool } from './pool.ts';
 import { JOB_RETRY_LIMIT, SWEEP_QUEUE, recoverChunks, type ChunkJob } from './recovery.ts';
@@ -35,10 +36,11 @@ export interface SweepRunner {
   stop(): Promise<void>;
 }
 
-/** Cached grid of a sweep: the thread pool compiles it once per thread from its key. */
+/** Cached grid of a sweep (or, over a device, its spec): the thread pool compiles it once per thread from its key. */
 interface SweepGridInfo {
-  grid: SweepGridShape;
+  grid: SweepGridShape | null;
   constraints: SweepConstraints;
+  device: DeviceSweepSpec | null;
 }
 
 const POLL_SECONDS = 0.5;
@@ -53,7 +55,7 @@ function sweepGridCache(db: DataSource): (sweepId: string) => Promise<SweepGridI
     if (g) {
       grids.delete(sweepId);
     } else {
-      const [row] = (await db.query(`SELECT grid, constraints FROM sweeps WHERE id = $1`, [sweepId])) as SweepGridInfo[];
+      const [row] = (await db.query(`SELECT grid, constraints, device FROM sweeps WHERE id = $1`, [sweepId])) as SweepGridInfo[];
       if (!row) throw new Error(`sweep ${sweepId} is gone`);
       g = row;
     }
@@ -92,9 +94,10 @@ function chunkRunner(o: RunnerOptions, workerId: string, pool: SweepPool): (job:
     if (!row) return;
     await o.db.query(`UPDATE sweeps SET status = 'running', started_at = COALESCE(started_at, now()), updated_at = now() WHERE id = $1 AND status = 'queued'`, [sweepId]);
     try {
-      const { grid, constraints } = await gridOf(sweepId);
-      const points = await pool.run({ gridKey: sweepId, grid, constraints, start: row.point_start, end: row.point_end });
-      await writeChunk(o.db, sweepId, chunkIndex, points, workerId);
+      const { grid, constraints, device } = await gridOf(sweepId);
+      const range = { gridKey: sweepId, start: row.point_start, end: row.point_end };
+      const points = device ? await pool.runDevice({ ...range, device }) : await pool.run({ ...range, grid: grid!, constraints });
+      await writeChunk(o.db, sweepId, chunkIndex, points, workerId, device ? 'device' : 'grid');
     } catch (err) {
       const final = row.attempts > JOB_RETRY_LIMIT;
       o.log.error({ err, sweepId, chunkIndex, attempt: row.attempts }, final ? 'sweep chunk failed for good' : 'sweep chunk failed; retrying');

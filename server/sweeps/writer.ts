@@ -1,12 +1,12 @@
 /**
  * Writes one chunk's results in one transaction on the main thread: the points and design rows
  * (INSERT … ON CONFLICT DO NOTHING, so a chunk done twice writes nothing twice), the chunk's status and
- * the sweep's counters, which only count rows actually inserted.
+ * the sweep's counters, which only count rows actually inserted. A device sweep's points are its variants.
  */
 import type { DataSource } from 'typeorm';
 import type { PointResult } from '../../shared/sweep/chunk.ts';
 import { currentCostModel } from '../services/sweep-pricing.ts';
-import { designRows, pointRow } from './rows.ts';
+import { designRows, deviceDesignRows, pointRow } from './rows.ts';
 
 /** Rows per INSERT: one JSON parameter each, expanded by PostgreSQL (no parameter-count limit). */
 const BATCH_ROWS = 1000;
@@ -19,6 +19,7 @@ export async function writeChunk(
   chunkIndex: number,
   points: PointResult[],
   workerId: string,
+  kind: 'grid' | 'device' = 'grid',
 ): Promise<WriteOutcome> {
   return db.transaction(async (m) => {
     // Lock the sweep row: a cancel and the counters serialise against it.
@@ -38,7 +39,8 @@ export async function writeChunk(
       inserted += res.length;
       failed += res.filter((r) => r.failed).length;
     }
-    const designs = designRows(sweepId, points, cost?.model ?? null);
+    // A device sweep's design row is its variant's coverage; it is priced by no module model (a device is several).
+    const designs = kind === 'device' ? deviceDesignRows(sweepId, points) : designRows(sweepId, points, cost?.model ?? null);
     for (let i = 0; i < designs.length; i += BATCH_ROWS) {
       await m.query(
         `INSERT INTO sweep_designs SELECT * FROM jsonb_populate_recordset(NULL::sweep_designs, $1::jsonb) ON CONFLICT DO NOTHING`,

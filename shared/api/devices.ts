@@ -1,6 +1,5 @@
 /** Response shapes of the device routes (server/routes/devices.ts). */
 import type { DeviceLayout } from '../schemas/device.ts';
-import type { DeviceSweepRow } from '../devices/device-sweep.ts';
 
 /** A device as GET/POST /api/studies/:id/devices and GET/PATCH /api/devices/:id return it. */
 export interface DeviceRow {
@@ -13,13 +12,4 @@ export interface DeviceRow {
   position: number;
   createdAt: string;
   updatedAt: string;
-}
-
-/** POST /api/devices/:id/sweep. */
-export interface DeviceSweepAnswer {
-  deviceId: string;
-  moduleIndex: number;
-  region: 'sphere' | 'sector';
-  sheetName: string | null;
-  rows: DeviceSweepRow[];
 }

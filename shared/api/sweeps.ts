@@ -6,6 +6,7 @@ import type { SweepCostBasis } from '../cost/cost-model.ts';
 import type { PointResult } from '../sweep/chunk.ts';
 import type { SteerSpan } from '../trade/trade-design.ts';
 import type { Element, Taper } from '../schemas/design.ts';
+import type { DeviceSweepAbout } from '../devices/device-sweep-spec.ts';
 
 export type SweepStatus = 'queued' | 'running' | 'done' | 'failed' | 'cancelled';
 
@@ -28,12 +29,14 @@ export interface SweepProgress<Time = string> {
   error: string | null;
   /** The sheet that judges its designs; null: the study's first. */
   targetSheetId: string | null;
+  /** A sweep over a device (its variants' coverage are the design rows); null for a sweep over a grid of designs. */
+  device: DeviceSweepAbout | null;
   createdAt: Time;
   startedAt: Time | null;
   finishedAt: Time | null;
 }
 
-/** POST /api/studies/:id/sweeps. */
+/** POST /api/studies/:id/sweeps and POST /api/devices/:id/sweeps. */
 export interface SweepCreated {
   id: string;
   pointsTotal: number;

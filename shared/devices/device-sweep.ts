@@ -9,7 +9,7 @@ import { MAX_DEVICE_MODULES } from '../schemas/device.ts';
 import type { LimitKey } from '../targets/sheet.ts';
 import type { DeviceCoverageResult } from './device-coverage.ts';
 
-/** Variants one request may hold (each is a full coverage computation). */
+/** Variants one device sweep may hold (each is a full coverage computation). */
 export const MAX_DEVICE_SWEEP_VARIANTS = 48;
 export const DEVICE_SWEEP_FIELDS = ['nx', 'ny', 'dxMm', 'dyMm', 'phaseBits', 'channelPowerDbm'] as const;
 export type DeviceSweepField = (typeof DEVICE_SWEEP_FIELDS)[number];
@@ -23,6 +23,13 @@ const values = (rule: string, int = false) =>
 export const DeviceSweepRequestSchema = z
   .object(
     {
+      /** The stored sweep's name; absent: the device's name and the module varied. */
+      name: z
+        .string({ error: 'must be a name of 1 to 200 characters' })
+        .trim()
+        .min(1, 'must be a name of 1 to 200 characters')
+        .max(200, 'must be a name of 1 to 200 characters')
+        .optional(),
       moduleIndex: z.int({ error: `must be the index of a module of the device (0 to ${MAX_DEVICE_MODULES - 1})` }).min(0, 'must be at least 0').max(MAX_DEVICE_MODULES - 1, `must be at most ${MAX_DEVICE_MODULES - 1}`),
       vary: z
         .object(
@@ -38,7 +45,7 @@ export const DeviceSweepRequestSchema = z
         )
         .strict(),
     },
-    { error: 'must be a device sweep {moduleIndex, vary}' },
+    { error: 'must be a device sweep {name?, moduleIndex, vary}' },
   )
   .strict()
   .superRefine((r, ctx) => {
@@ -47,8 +54,14 @@ export const DeviceSweepRequestSchema = z
   });
 export type DeviceSweepRequest = z.output<typeof DeviceSweepRequestSchema>;
 
+/** One variant of the varied module: the values it takes and the design they make. */
+export interface DeviceSweepVariant {
+  params: Partial<Record<DeviceSweepField, number>>;
+  design: Design;
+}
+
 /** Every combination of the varied values applied to the base design, first field slowest; a bad one names its field. */
-export function deviceSweepVariants(base: Design, vary: DeviceSweepRequest['vary']): { params: Partial<Record<DeviceSweepField, number>>; design: Design }[] {
+export function deviceSweepVariants(base: Design, vary: DeviceSweepRequest['vary']): DeviceSweepVariant[] {
   let combos: Partial<Record<DeviceSweepField, number>>[] = [{}];
   for (const k of DEVICE_SWEEP_FIELDS) {
     const vs = vary[k];

@@ -114,11 +114,23 @@ export const DESIGN_COST_COLUMNS: ColumnDef[] = [
   col('heatWPerCm2', 'heat_w_per_cm2', 'float'),
 ];
 
+/**
+ * Coverage of a device sweep's variant (shared/devices/device-sweep.ts, DeviceSweepRow): the 50th-percentile EIRP,
+ * the lowest EIRP across the sheet's sector (null over the sphere) and the beams of every codebook. Its peak EIRP is
+ * the summary's peakEirpDbm. Null on the rows of a grid sweep.
+ */
+export const DESIGN_COVERAGE_COLUMNS: ColumnDef[] = [
+  col('p50EirpDbm', 'p50_eirp_dbm', 'float'),
+  col('sectorMinEirpDbm', 'sector_min_eirp_dbm', 'float'),
+  col('beams', 'beams', 'int'),
+];
+
 export const DESIGN_COLUMNS: ColumnDef[] = [
   col('designIndex', 'design_index', 'int'),
   ...DESIGN_PARAM_COLUMNS,
   ...DESIGN_SUMMARY_COLUMNS,
   ...DESIGN_COST_COLUMNS,
+  ...DESIGN_COVERAGE_COLUMNS,
 ];
 
 type Labelled = { kind: string } & Record<string, unknown>;

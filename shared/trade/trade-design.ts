@@ -2,7 +2,9 @@
  * One row of the trade table: a design (its parameters, without the steering that varies across its points) and
  * its worst-case figures over its points. The server's designs endpoint and the client-side fallback both map here.
  */
+import type { Region } from '../schemas/coverage.ts';
 import type { DesignFigures } from '../targets/figures.ts';
+import { deviceFigures } from '../devices/device-figures.ts';
 
 export interface TaperLike {
   kind: string;
@@ -48,6 +50,9 @@ export interface TradeDesign {
   gainMaxDbi?: number | null;
   gainAtSteerMinDbi?: number | null;
   pointingLossMaxDb?: number | null;
+  /** A device sweep's variant: its EIRP at the 50th percentile (dBm, over its region) and beams of every codebook. */
+  p50EirpDbm?: number | null;
+  beams?: number | null;
 }
 
 /** Short words for a taper, as the table and the chart legends print it. */
@@ -102,8 +107,11 @@ export interface SteerSpan {
 
 const num = (v: unknown): number | null => (typeof v === 'number' && Number.isFinite(v) ? v : null);
 
-/** Maps a designs-endpoint row to a trade row; without a span the scan-coverage checks are not applicable. */
-export function fromDesignRow(row: DesignRowJson, span: SteerSpan | null): TradeDesign {
+/**
+ * Maps a designs-endpoint row to a trade row; without a span the scan-coverage checks are not applicable. A device
+ * sweep's row (`region`: the region its coverage covers) has the device's figures only, as its coverage judged them.
+ */
+export function fromDesignRow(row: DesignRowJson, span: SteerSpan | null, region: Region | null = null): TradeDesign {
   const d = row.design ?? {};
   const dx = num(d.dxMm) ?? num(row.dxMm) ?? 0;
   const params: TradeParams = {
@@ -141,10 +149,13 @@ export function fromDesignRow(row: DesignRowJson, span: SteerSpan | null): Trade
     dcPowerW: num(row.dcPowerW),
     heatWPerCm2: num(row.heatWPerCm2),
   };
+  const coverage = region
+    ? deviceFigures({ region, peakEirpDbm: num(row.peakEirpDbm), minEirpDbm: num(row.sectorMinEirpDbm), eirpPercentilesDbm: { '50': num(row.p50EirpDbm) } })
+    : null;
   return {
     designIndex: row.designIndex,
     params,
-    figures,
+    figures: coverage ?? figures,
     gratingLobeOnsetAzDeg: num(row.gratingLobeOnsetAzDeg),
     gratingLobeOnsetElDeg: num(row.gratingLobeOnsetElDeg),
     scanRangeDeg: num(row.scanRangeDeg),
@@ -156,5 +167,6 @@ export function fromDesignRow(row: DesignRowJson, span: SteerSpan | null): Trade
     gainMaxDbi: num(row.gainMaxDbi),
     gainAtSteerMinDbi: num(row.gainAtSteerMinDbi),
     pointingLossMaxDb: num(row.pointingLossMaxDb),
+    ...(region ? { p50EirpDbm: num(row.p50EirpDbm), beams: num(row.beams) } : {}),
   };
 }

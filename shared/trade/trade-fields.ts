@@ -6,7 +6,7 @@
 import type { LimitKey } from '../targets/sheet.ts';
 import { elementLabel, pitchInWavelengths, taperLabel, type TradeDesign } from './trade-design.ts';
 
-export type FieldGroup = 'Parameters' | 'Metrics';
+export type FieldGroup = 'Parameters' | 'Metrics' | 'Coverage';
 export type FieldType = 'number' | 'text' | 'boolean';
 
 export interface TradeField {
@@ -81,7 +81,29 @@ export const TRADE_FIELDS: readonly TradeField[] = [
   { key: 'heatWPerCm2', label: 'Heat density', unit: 'W/cm²', group: 'Metrics', type: 'number', digits: 3, limit: 'maxHeatWPerCm2', better: 'min', get: (r) => f(r).heatWPerCm2 ?? null },
 ];
 
-const BY_KEY = new Map(TRADE_FIELDS.map((x) => [x.key, x]));
+/**
+ * A device sweep's rows: each is a variant of one module, judged by the device's coverage (shared/devices, the sheet's
+ * coverage limits) instead of one design's figures over its steering. Shown instead of the Metrics group.
+ */
+export const COVERAGE_FIELDS: readonly TradeField[] = [
+  { key: 'peakEirpDbm', label: 'Peak EIRP', unit: 'dBm', group: 'Coverage', type: 'number', digits: 1, limit: 'minPeakEirpDbm', better: 'max', get: (r) => f(r).peakEirpDbm },
+  { key: 'p50EirpDbm', label: 'EIRP at the 50th percentile', unit: 'dBm', group: 'Coverage', type: 'number', digits: 1, limit: 'minCoverageP50EirpDbm', better: 'max', get: (r) => r.p50EirpDbm ?? null },
+  { key: 'sectorMinEirpDbm', label: 'Lowest EIRP across the sector', unit: 'dBm', group: 'Coverage', type: 'number', digits: 1, limit: 'minSectorEirpDbm', better: 'max', get: (r) => f(r).sectorMinEirpDbm ?? null },
+  { key: 'beams', label: 'Beams (all codebooks)', unit: '', group: 'Coverage', type: 'number', digits: 0, better: 'min', get: (r) => r.beams ?? null },
+];
+
+/**
+ * The fields a sweep's rows show: parameters and metrics; for a sweep over a device (`varied`: the parameters it
+ * varies, the rest being the device's own) the varied parameters and the coverage figures.
+ */
+export function tradeFieldsFor(varied: readonly string[] | null): readonly TradeField[] {
+  return varied ? [...TRADE_FIELDS.filter((x) => x.group === 'Parameters' && varied.includes(x.key)), ...COVERAGE_FIELDS] : TRADE_FIELDS;
+}
+
+/** Every field of either kind of sweep, once per key (peak EIRP is the same figure in both): lookups, URL keys. */
+export const ALL_TRADE_FIELDS: readonly TradeField[] = [...TRADE_FIELDS, ...COVERAGE_FIELDS.filter((c) => !TRADE_FIELDS.some((t) => t.key === c.key))];
+
+const BY_KEY = new Map(ALL_TRADE_FIELDS.map((x) => [x.key, x]));
 
 export function tradeField(key: string): TradeField | undefined {
   return BY_KEY.get(key);

@@ -1,7 +1,6 @@
-/** A study's devices (modules placed on an outline) and sweeps over one module's parameters. */
-import type { DeviceRow, DeviceSweepAnswer } from '@shared/api/devices.ts';
+/** A study's devices (modules placed on an outline); sweeps over one of them start in src/api/sweeps.ts. */
+import type { DeviceRow } from '@shared/api/devices.ts';
 import type { DeviceLayoutInput } from '@shared/schemas/device.ts';
-import type { DeviceSweepField } from '@shared/devices/device-sweep.ts';
 import { api } from './client';
 
 const one = (id: string) => `/api/devices/${encodeURIComponent(id)}`;
@@ -12,6 +11,4 @@ export const devicesApi = {
     api.post<DeviceRow>(`/api/studies/${encodeURIComponent(studyId)}/devices`, body),
   save: (id: string, patch: { name?: string; layout?: DeviceLayoutInput; targetSheetId?: string | null }) => api.patch<DeviceRow>(one(id), patch),
   remove: (id: string) => api.delete<void>(one(id)),
-  sweep: (id: string, body: { moduleIndex: number; vary: Partial<Record<DeviceSweepField, number[]>> }) =>
-    api.post<DeviceSweepAnswer>(`${one(id)}/sweep`, body),
 };

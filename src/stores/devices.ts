@@ -3,8 +3,7 @@ import { defineStore } from 'pinia';
 import { computed, ref } from 'vue';
 import { devicesApi } from '@/api/devices';
 import type { DeviceLayoutInput } from '@shared/schemas/device.ts';
-import type { DeviceSweepField } from '@shared/devices/device-sweep.ts';
-import type { DeviceRow, DeviceSweepAnswer } from '@shared/api/devices.ts';
+import type { DeviceRow } from '@shared/api/devices.ts';
 import { errorMessage } from '@/api/errors';
 
 export type { DeviceRow } from '@shared/api/devices.ts';
@@ -60,10 +59,5 @@ export const useDevicesStore = defineStore('devices', () => {
     selectedId.value = id;
   }
 
-  /** Varies one module's parameters of a saved device; the server computes each variant's coverage. */
-  function sweep(id: string, moduleIndex: number, vary: Partial<Record<DeviceSweepField, number[]>>): Promise<DeviceSweepAnswer> {
-    return devicesApi.sweep(id, { moduleIndex, vary });
-  }
-
-  return { studyId, list, loading, error, selectedId, selected, load, create, save, remove, select, sweep };
+  return { studyId, list, loading, error, selectedId, selected, load, create, save, remove, select };
 });

@@ -9,6 +9,7 @@ import { candidatesApi } from '@/api/candidates';
 import { sweepsApi, type SweepStart } from '@/api/sweeps';
 import type { CandidateDesign, SweepCreated, SweepProgress, SweepStatus } from '@shared/api/sweeps.ts';
 import { useCandidatesStore } from '@/stores/candidates';
+import type { DeviceSweepRequest } from '@shared/devices/device-sweep.ts';
 
 export type { SweepProgress, SweepStatus } from '@shared/api/sweeps.ts';
 
@@ -69,6 +70,16 @@ export const useSweepsStore = defineStore('sweeps', () => {
     return created;
   }
 
+  /** Starts a sweep over one module of a device (in the device's study); field failures as for start(). */
+  async function startOverDevice(deviceId: string, body: DeviceSweepRequest): Promise<SweepCreated> {
+    const created = await sweepsApi.startOverDevice(deviceId, body);
+    sweeps.value = [
+      { id: created.id, name: body.name ?? 'Device sweep', status: 'queued', pointsTotal: created.pointsTotal, pointsDone: 0, createdAt: new Date().toISOString(), targetSheetId: null },
+      ...sweeps.value,
+    ];
+    return created;
+  }
+
   async function cancel(id: string): Promise<void> {
     await sweepsApi.cancel(id);
     applyProgress(id, { status: 'cancelled' });
@@ -85,5 +96,5 @@ export const useSweepsStore = defineStore('sweeps', () => {
 
   const eventsUrl = (id: string): string => sweepsApi.eventsUrl(id);
 
-  return { studyId, candidates, sweeps, loading, error, load, refreshSweeps, start, cancel, applyProgress, eventsUrl };
+  return { studyId, candidates, sweeps, loading, error, load, refreshSweeps, start, startOverDevice, cancel, applyProgress, eventsUrl };
 });

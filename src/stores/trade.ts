@@ -9,6 +9,7 @@ import { errorMessage } from '@/api/errors';
 import { sweepsApi } from '@/api/sweeps';
 import { scanWindowLabel, type ViewQuery } from '@/api/results-query';
 import type { PointResult } from '@shared/sweep/chunk.ts';
+import { DEVICE_SWEEP_FIELDS } from '@shared/devices/device-sweep.ts';
 import type { SteerSpan } from '@shared/trade/trade-design.ts';
 import { useDesignPoints } from './trade/design-points';
 import { useDesignRows } from './trade/design-rows';
@@ -36,7 +37,11 @@ export const useTradeStore = defineStore('trade', () => {
   const span = ref<SteerSpan | null>(null);
 
   const choice = useSweepChoice();
-  const designs = useDesignRows(choice.sweepId, choice.sheet, span, fail);
+  /** The open sweep's device when it is a sweep over a device (its rows are then coverage figures). */
+  const device = computed(() => choice.sweeps.value.find((s) => s.id === choice.sweepId.value)?.device ?? null);
+  /** The parameters a device sweep varies (its table's parameter columns); null for a grid sweep. */
+  const deviceVaried = computed(() => (device.value ? DEVICE_SWEEP_FIELDS.filter((k) => device.value!.vary[k]) : null));
+  const designs = useDesignRows(choice.sweepId, choice.sheet, span, fail, device);
   const points = useDesignPoints(choice.sweepId);
   const selection = useSelection(designs.rows);
 
@@ -83,14 +88,14 @@ export const useTradeStore = defineStore('trade', () => {
   }
 
   /** The sheet's scan range the design figures are judged over (null = every steering angle of the sweep). */
-  const scanWindow = computed(() => scanWindowLabel(choice.sheet.value));
+  const scanWindow = computed(() => (device.value ? null : scanWindowLabel(choice.sheet.value)));
 
   function csvUrl(): string | null {
     return choice.sweepId.value ? sweepsApi.csvUrl(choice.sweepId.value) : null;
   }
 
   return {
-    studyId: choice.studyId, sweeps: choice.sweeps, sweepId: choice.sweepId, span, sheet: choice.sheet, sheetName: choice.sheetName, scanWindow,
+    studyId: choice.studyId, sweeps: choice.sweeps, sweepId: choice.sweepId, device, deviceVaried, span, sheet: choice.sheet, sheetName: choice.sheetName, scanWindow,
     selected: selection.selected, selectedRows: selection.selectedRows, rows: designs.rows, rowsTotal: designs.rowsTotal, loading, error,
     view: designs.view, pickedPoint: points.pickedPoint, costBasis: designs.costBasis,
     load, openSweep, fetchPage: designs.fetchPage, fetchAll: designs.fetchAll, setView: designs.setView, pointsOf: points.pointsOf,

@@ -91,7 +91,7 @@ const BODIES: Record<string, BodySpec> = {
     body: (ids) => ({ name: 'Phone', notes: 'n', targetSheetId: ids.sheetId, layout: DEVICE_LAYOUT(ids) }),
     allowEmpty: ['notes'],
   },
-  'POST /api/devices/:id/sweep': { body: () => ({ moduleIndex: 0, vary: { nx: [4, 6], channelPowerDbm: [10] } }) },
+  'POST /api/devices/:id/sweeps': { body: () => ({ name: 'Spoilt device sweep', moduleIndex: 0, vary: { nx: [4, 6], channelPowerDbm: [10] } }) },
   'PATCH /api/devices/:id': { body: (ids) => ({ name: 'Phone 2', notes: 'n', layout: DEVICE_LAYOUT(ids) }), allowEmpty: ['notes'] },
   'POST /api/studies/:id/target-sheets': {
     body: () => ({ preset: null, sheet: { name: 'Small cell', minSectorEirpDbm: 43, serviceSector: { azMinDeg: -50, azMaxDeg: 50, elMinDeg: -10, elMaxDeg: 10 } } }),

@@ -1,7 +1,5 @@
 import request from 'supertest';
-import { afterAll, beforeEach, describe, expect, it } from 'vitest';
-import { destroyDeviceSweepPool } from '../../server/devices/device-sweep-pool.ts';
-import { HANDSET_28GHZ } from '../../shared/targets/presets.ts';
+import { beforeEach, describe, expect, it } from 'vitest';
 import { useApiTest } from '../helpers/app.ts';
 
 const api = useApiTest({ appPerFile: true, signIn: ['engineer', 'reviewer', 'outsider'] });
@@ -72,43 +70,5 @@ describe('devices', () => {
     expect((await api.outsider.get(`/api/devices/${created.id}`)).status).toBe(404);
     expect((await api.outsider.get(`/api/studies/${studyId}/devices`)).status).toBe(404);
     expect((await request(api.app).get(`/api/devices/${created.id}`)).status).toBe(401);
-  });
-});
-
-describe('POST /api/devices/:id/sweep', () => {
-  afterAll(async () => {
-    await destroyDeviceSweepPool(); // before the helper closes the database
-  });
-
-  it('varies one module\'s candidate on the worker pool, the layout and codebook rule fixed, judged against the device\'s sheet', { timeout: 120_000 }, async () => {
-    const sheet = (await api.engineer.post(`/api/studies/${studyId}/target-sheets`).send({ preset: 'handset-28ghz', sheet: HANDSET_28GHZ.sheet })).body;
-    const grid = { outline: { widthMm: 72, heightMm: 150, depthMm: 8 }, modules: [
-      { candidateId, face: 'right', codebook: { kind: 'grid', grid: 'az -45:45:15 × el 0' } },
-      { candidateId, face: 'left', codebook: { kind: 'grid', grid: 'az -45:45:15 × el 0' } },
-    ] };
-    const device = (await api.engineer.post(`/api/studies/${studyId}/devices`).send({ name: 'Phone', targetSheetId: sheet.id, layout: grid })).body;
-    const res = await api.reviewer.post(`/api/devices/${device.id}/sweep`).send({ moduleIndex: 0, vary: { channelPowerDbm: [4, 10] } });
-    expect(res.status).toBe(200);
-    expect(res.body.region).toBe('sphere');
-    expect(res.body.rows.map((r: { params: unknown }) => r.params)).toEqual([{ channelPowerDbm: 4 }, { channelPowerDbm: 10 }]);
-    const [low, high] = res.body.rows as { peakEirpDbm: number; p50EirpDbm: number; beams: number; pass: boolean; failed: string[] }[];
-    // Both modules are the same 1×4 at 10 dBm per channel until the varied one drops to 4 dBm: the device peak stays
-    // the fixed module's (0.1 dB, the engine's stated accuracy), while the 50th percentile, half served by the
-    // weakened module, falls (by construction).
-    expect(high!.peakEirpDbm - low!.peakEirpDbm).toBeLessThan(0.1);
-    expect(high!.p50EirpDbm).toBeGreaterThan(low!.p50EirpDbm);
-    expect(high!.beams).toBe(14);
-    // Judged against the handset sheet: pass is exactly "50th percentile and peak at or above the sheet's floors".
-    expect(high!.pass).toBe(high!.p50EirpDbm >= HANDSET_28GHZ.sheet.minCoverageP50EirpDbm! && high!.peakEirpDbm >= HANDSET_28GHZ.sheet.minPeakEirpDbm!);
-  });
-
-  it('answers 400 naming the field for too many variants or a module the device lacks', async () => {
-    const device = (await api.engineer.post(`/api/studies/${studyId}/devices`).send({ name: 'D', layout: layout(candidateId) })).body;
-    const many = await api.engineer.post(`/api/devices/${device.id}/sweep`).send({ moduleIndex: 0, vary: { nx: [2, 3, 4, 5, 6, 7, 8], dxMm: [4, 4.5, 5, 5.5, 6, 6.5, 7, 7.5] } });
-    expect(many.status).toBe(400);
-    expect(many.body.error.message).toBe('vary: gives 56 variants; at most 48');
-    const missing = await api.engineer.post(`/api/devices/${device.id}/sweep`).send({ moduleIndex: 3, vary: { nx: [4] } });
-    expect(missing.body.error.fields[0].field).toBe('moduleIndex');
-    expect((await api.outsider.post(`/api/devices/${device.id}/sweep`).send({ moduleIndex: 0, vary: { nx: [4] } })).status).toBe(404);
   });
 });

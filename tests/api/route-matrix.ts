@@ -257,8 +257,9 @@ export const matrix: MatrixRow[] = [
   { method: 'POST', path: '/api/studies/:id/devices', params: { id: 'studyId' }, body: {}, anonymous: 401, reviewer: 403, engineer: 400, admin: 400, otherTeam: 400 },
   { method: 'GET', path: '/api/devices/:id', params: { id: 'deviceId' }, ...member(200), otherTeam: 404 },
   { method: 'PATCH', path: '/api/devices/:id', params: { id: 'deviceId' }, body: { name: 'Renamed' }, anonymous: 401, reviewer: 403, engineer: 200, admin: 200, otherTeam: 404 },
-  // The fixture's candidate has no power per channel, so a member past the access check hears 400 (nothing to judge).
-  { method: 'POST', path: '/api/devices/:id/sweep', params: { id: 'deviceId' }, body: { moduleIndex: 0, vary: { nx: [4] } }, ...member(400), otherTeam: 404 },
+  // A stored sweep needs an engineer; the fixture's candidate has no power per channel, so one past the access check
+  // hears 400 (nothing to judge) and nothing is stored.
+  { method: 'POST', path: '/api/devices/:id/sweeps', params: { id: 'deviceId' }, body: { moduleIndex: 0, vary: { nx: [4] } }, anonymous: 401, reviewer: 403, engineer: 400, admin: 400, otherTeam: 404 },
   { method: 'DELETE', path: '/api/devices/:id', params: { id: 'deviceId' }, anonymous: 401, reviewer: 403, engineer: 204, admin: 204, otherTeam: 404 },
   { method: 'GET', path: '/api/candidates/:id', params: { id: 'candidateId' }, ...member(200), otherTeam: 404 },
   { method: 'PATCH', path: '/api/candidates/:id', params: { id: 'candidateId' }, body: {}, anonymous: 401, reviewer: 403, engineer: 200, admin: 200, otherTeam: 404 },

@@ -112,6 +112,7 @@ describe('SweepsPanel', () => {
       if (url === '/api/auth/csrf') return json(200, { token: 't' });
       if (key === 'GET /api/studies/s1/candidates') return json(200, [{ id: 'c1', name: 'Edge module', design: candidate }]);
       if (key === 'GET /api/studies/s1/sweeps') return json(200, sweeps);
+      if (key === 'GET /api/studies/s1/devices') return json(200, []);
       if (key === 'POST /api/studies/s1/sweeps') {
         posted.push(JSON.parse(String(init!.body)));
         return json(201, { id: 'w1', pointsTotal: 3 });
@@ -164,6 +165,7 @@ describe('SweepsPanel', () => {
       if (url === '/api/auth/csrf') return json(200, { token: 't' });
       if (key === 'GET /api/studies/s1/candidates') return json(200, [{ id: 'c1', name: 'Edge module', design: candidate }]);
       if (key === 'GET /api/studies/s1/sweeps') return json(200, []);
+      if (key === 'GET /api/studies/s1/devices') return json(200, []);
       if (key === 'POST /api/studies/s1/sweeps') {
         return json(400, { error: { code: 'invalid_input', message: 'grid: has 3,000,000 points; the limit is 2,000,000', fields: [{ field: 'grid.dxMm', message: 'is too fine for this server' }] } });
       }
@@ -174,6 +176,78 @@ describe('SweepsPanel', () => {
     await w.findAll('button').find((b) => b.text() === 'Run sweep')!.trigger('click');
     await flushPromises();
     expect(w.find('[data-field="dxMm"] .error').text()).toContain('is too fine for this server');
+    w.unmount();
+  }, 30_000);
+});
+
+describe('SweepsPanel over a device', () => {
+  const device = {
+    id: 'd1', studyId: 's1', name: 'Phone', targetSheetId: null, notes: '', position: 0, createdAt: '', updatedAt: '',
+    layout: {
+      outline: { widthMm: 72, heightMm: 150, depthMm: 8 },
+      modules: [
+        { candidateId: 'c1', face: 'right', u: 0.5, v: 0.5, codebook: { kind: 'grid', grid: 'az -45:45:15 × el 0' } },
+        { candidateId: 'c1', face: 'left', u: 0.5, v: 0.5, codebook: { kind: 'grid', grid: 'az -45:45:15 × el 0' } },
+      ],
+    },
+  };
+
+  it('picks the device and module, counts the variants, starts a stored sweep over the device and follows it', async () => {
+    const posted: { url: string; body: unknown }[] = [];
+    let answer = () => json(201, { id: 'w2', pointsTotal: 6 });
+    vi.stubGlobal('EventSource', FakeEventSource);
+    vi.stubGlobal('fetch', vi.fn(async (url: string, init?: RequestInit) => {
+      const key = `${init?.method ?? 'GET'} ${url}`;
+      if (url === '/api/auth/csrf') return json(200, { token: 't' });
+      if (key === 'GET /api/studies/s1/candidates') return json(200, [{ id: 'c1', name: 'Edge module', design: candidate }]);
+      if (key === 'GET /api/studies/s1/sweeps') return json(200, []);
+      if (key === 'GET /api/studies/s1/devices') return json(200, [device]);
+      if (key === 'POST /api/devices/d1/sweeps') {
+        posted.push({ url, body: JSON.parse(String(init!.body)) });
+        return answer();
+      }
+      throw new Error(`unexpected request ${key}`);
+    }));
+    const w = mount(SweepsPanel, { props: { studyId: 's1' }, global: { plugins: [Antd] }, attachTo: document.body });
+    await flushPromises();
+    await w.find('input[type="radio"][value="device"]').setValue(true);
+    await flushPromises();
+    const form = () => w.find('[data-test="device-sweep-form"]');
+    expect(form().find('select[aria-label="Device to sweep"]').text()).toContain('Phone');
+    expect(form().find('select[aria-label="Module to vary"]').findAll('option').map((o) => o.text())).toEqual(['M1 · right · Edge module', 'M2 · left · Edge module']);
+    await form().find('select[aria-label="Module to vary"]').setValue('1');
+    await form().find('input[aria-label="Values of nx (elements along x)"]').setValue('2, 4');
+    await form().find('input[aria-label="Values of power per channel (dBm)"]').setValue('4 10 12');
+    await flushPromises();
+    expect(form().find('[data-test="variant-count"]').text()).toBe('6 variants');
+    const run = () => form().findAll('button').find((b) => b.text() === 'Run device sweep')!;
+
+    // 7 × 7 = 49 variants: over the limit, said beside the count, and the button stays off.
+    await form().find('input[aria-label="Values of dx (mm)"]').setValue('4, 4.5, 5, 5.5, 6, 6.5, 7');
+    await form().find('input[aria-label="Values of nx (elements along x)"]').setValue('2, 3, 4, 5, 6, 7, 8');
+    await form().find('input[aria-label="Values of power per channel (dBm)"]').setValue('');
+    await flushPromises();
+    expect(form().find('[data-test="variant-count"]').text()).toBe('49 variants (at most 48)');
+    expect(run().attributes('disabled')).toBeDefined();
+
+    await form().find('input[aria-label="Values of dx (mm)"]').setValue('');
+    await form().find('input[aria-label="Values of nx (elements along x)"]').setValue('2, 4');
+    await form().find('input[aria-label="Values of power per channel (dBm)"]').setValue('4 10 12');
+    await flushPromises();
+    // The server's field error shows beside that field.
+    answer = () => json(400, { error: { code: 'invalid_input', message: 'vary.nx: must be at most 64', fields: [{ field: 'vary.nx', message: 'must be at most 64' }] } });
+    await run().trigger('click');
+    await flushPromises();
+    expect(form().text()).toContain('must be at most 64');
+
+    answer = () => json(201, { id: 'w2', pointsTotal: 6 });
+    await run().trigger('click');
+    await flushPromises();
+    expect(posted.at(-1)).toEqual({ url: '/api/devices/d1/sweeps', body: { name: 'Phone: M2 varied', moduleIndex: 1, vary: { nx: [2, 4], channelPowerDbm: [4, 10, 12] } } });
+    expect(FakeEventSource.last!.url).toBe('/api/sweeps/w2/events');
+    FakeEventSource.last!.emit('progress', { status: 'running', pointsDone: 2, pointsTotal: 6, ratePerSecond: 4, etaSeconds: 1 });
+    await flushPromises();
+    expect(w.text()).toContain('2 of 6 points');
     w.unmount();
   }, 30_000);
 });

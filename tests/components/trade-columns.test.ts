@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { CellClassParams, ColDef, ColGroupDef, ValueFormatterParams, ValueGetterParams } from 'ag-grid-community';
 import { tradeColumns, leafColumns, STATUS_COL_ID, DESIGN_COL_ID } from '../../src/components/trade/trade-columns.ts';
 import { HANDSET_28GHZ } from '../../shared/targets/presets.ts';
-import type { TradeDesign } from '../../shared/trade/trade-design.ts';
+import { fromDesignRow, type TradeDesign } from '../../shared/trade/trade-design.ts';
 import { tradeRow } from './trade-fixtures.ts';
 
 // The handset preset plus an edge-of-scan floor of 11.5 dBm invented for this test (the preset sets none).
@@ -92,5 +92,35 @@ describe('tradeColumns({ sheet })', () => {
   it('leaves loading rows (no data yet) blank instead of throwing', () => {
     const c = col('channels');
     expect((c.valueGetter as (p: ValueGetterParams<TradeDesign>) => unknown)({ data: undefined } as ValueGetterParams<TradeDesign>)).toBeNull();
+  });
+});
+
+describe('tradeColumns({ sheet, deviceVaried })', () => {
+  // A device sweep's design row as GET /api/sweeps/:id/designs answers it, read over the sphere.
+  const row = (designIndex: number, peakEirpDbm: number, p50EirpDbm: number) =>
+    fromDesignRow({ designIndex, design: { frequencyGHz: 28, nx: 4, ny: 1, dxMm: 5.35 }, angles: 1, pointsFailed: 0, peakEirpDbm, p50EirpDbm, sectorMinEirpDbm: null, beams: 14 }, null, { kind: 'sphere' });
+  const deviceCols = tradeColumns({ sheet: HANDSET_28GHZ.sheet, deviceVaried: ['nx', 'channelPowerDbm'] });
+  const deviceCol = (id: string) => leafColumns(deviceCols).find((x) => x.colId === id)!;
+
+  it('shows the varied parameters and the coverage figures instead of the metrics', () => {
+    const groups = deviceCols.slice(2) as ColGroupDef[];
+    expect(groups.map((g) => g.headerName)).toEqual(['Parameters', 'Coverage']);
+    expect(groups[0]!.children.map((c) => (c as ColDef).colId)).toEqual(['nx', 'channelPowerDbm']);
+    expect(groups[1]!.children.map((c) => (c as ColDef).colId)).toEqual(['peakEirpDbm', 'p50EirpDbm', 'sectorMinEirpDbm', 'beams']);
+    expect(deviceCol('p50EirpDbm').headerName).toBe('EIRP at the 50th percentile (dBm)');
+    expect(deviceCol('p50EirpDbm').sortable).toBe(true);
+    expect(deviceCol('p50EirpDbm').filter).toBe('agNumberColumnFilter');
+  });
+
+  it('judges the coverage figures against the sheet\'s coverage floors, and nothing else', () => {
+    const sheet = HANDSET_28GHZ.sheet; // n257 power class 3: peak ≥ 22.4 dBm, 50th percentile ≥ 11.5 dBm (preset values)
+    const passing = row(0, sheet.minPeakEirpDbm! + 1, sheet.minCoverageP50EirpDbm! + 1);
+    const lowP50 = row(1, sheet.minPeakEirpDbm! + 1, sheet.minCoverageP50EirpDbm! - 0.1);
+    expect(classes(deviceCol('p50EirpDbm'), passing)).toEqual(['cell-pass']);
+    expect(classes(deviceCol('p50EirpDbm'), lowP50)).toEqual(['cell-fail']);
+    expect(classes(deviceCol('peakEirpDbm'), lowP50)).toEqual(['cell-pass']);
+    // The module limits of the sheet (aperture, channels, side lobes…) do not apply to a device's row.
+    expect(get(deviceCol(STATUS_COL_ID), passing)).toBe('pass');
+    expect(get(deviceCol(STATUS_COL_ID), lowP50)).toBe('fail');
   });
 });

@@ -8,7 +8,7 @@ import { LIMIT_LABELS } from '@shared/targets/sheet.ts';
 import { fieldVerdict, rowVerdict } from '@shared/trade/judge.ts';
 import { designFailLines } from '@shared/trade/fail-reasons.ts';
 import type { TradeDesign } from '@shared/trade/trade-design.ts';
-import { TRADE_FIELDS, fieldTitle, formatValue, serverKeyOf, type TradeField } from '@shared/trade/trade-fields.ts';
+import { fieldTitle, formatValue, serverKeyOf, tradeFieldsFor, type FieldGroup, type TradeField } from '@shared/trade/trade-fields.ts';
 
 export const STATUS_COL_ID = 'status';
 export const DESIGN_COL_ID = 'designIndex';
@@ -23,6 +23,8 @@ const NUMBER_FILTER_PARAMS = {
 
 export interface TradeColumnOptions {
   sheet: TargetSheet | null;
+  /** A sweep over a device: the parameters it varies, shown with its coverage columns instead of the metrics. */
+  deviceVaried?: readonly string[] | null;
 }
 
 function fieldColumn(field: TradeField, opts: TradeColumnOptions): ColDef<TradeDesign> {
@@ -50,7 +52,7 @@ function fieldColumn(field: TradeField, opts: TradeColumnOptions): ColDef<TradeD
   return col;
 }
 
-/** Status (pinned), design number (pinned), then the "Parameters" and "Metrics" groups. */
+/** Status (pinned), design number (pinned), then the "Parameters" and "Metrics" (or, over a device, "Coverage") groups. */
 export function tradeColumns(opts: TradeColumnOptions): (ColDef<TradeDesign> | ColGroupDef<TradeDesign>)[] {
   const status: ColDef<TradeDesign> = {
     colId: STATUS_COL_ID,
@@ -82,12 +84,13 @@ export function tradeColumns(opts: TradeColumnOptions): (ColDef<TradeDesign> | C
     valueGetter: (p: ValueGetterParams<TradeDesign>) => p.data?.designIndex ?? null,
   };
   // The server sorts by one field at a time; a shift-click multi-sort would silently use only the first.
-  const group = (name: 'Parameters' | 'Metrics'): ColGroupDef<TradeDesign> => ({
+  const fields = tradeFieldsFor(opts.deviceVaried ?? null);
+  const group = (name: FieldGroup): ColGroupDef<TradeDesign> => ({
     groupId: name.toLowerCase(),
     headerName: name,
-    children: TRADE_FIELDS.filter((x) => x.group === name).map((x) => fieldColumn(x, opts)),
+    children: fields.filter((x) => x.group === name).map((x) => fieldColumn(x, opts)),
   });
-  return [status, design, group('Parameters'), group('Metrics')];
+  return [status, design, group('Parameters'), group(opts.deviceVaried ? 'Coverage' : 'Metrics')];
 }
 
 /** Every leaf column in display order (for export headers). */

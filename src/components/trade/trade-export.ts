@@ -8,7 +8,7 @@ import { safeCell } from '@shared/export/safe-cell.ts';
 import type { TargetSheet } from '@shared/targets/sheet.ts';
 import { rowVerdict } from '@shared/trade/judge.ts';
 import type { TradeDesign } from '@shared/trade/trade-design.ts';
-import { TRADE_FIELDS, fieldTitle, serverKeyOf, type TradeField } from '@shared/trade/trade-fields.ts';
+import { ALL_TRADE_FIELDS, TRADE_FIELDS, fieldTitle, serverKeyOf, type TradeField } from '@shared/trade/trade-fields.ts';
 import type { ViewQuery } from './trade-query';
 
 export type ExportValue = string | number | boolean | null;
@@ -35,15 +35,15 @@ export function exportDigits(f: TradeField): number | null {
 
 const round = (v: number, digits: number) => Number(v.toFixed(digits));
 
-/** Header, units and values in table order: verdict, design number, then every parameter and metric. */
-export function exportTable(rows: readonly TradeDesign[], sheet: TargetSheet | null, about?: [string, string][]): ExportTable {
-  const digits = [null, 0, ...TRADE_FIELDS.map(exportDigits)];
+/** Header, units and values in table order: verdict, design number, then every parameter and metric (or coverage figure). */
+export function exportTable(rows: readonly TradeDesign[], sheet: TargetSheet | null, about?: [string, string][], fields: readonly TradeField[] = TRADE_FIELDS): ExportTable {
+  const digits = [null, 0, ...fields.map(exportDigits)];
   return {
-    header: ['Target sheet', 'Design #', ...TRADE_FIELDS.map((f) => `${f.group}: ${fieldTitle(f)}`)],
-    units: ['', '', ...TRADE_FIELDS.map((f) => f.unit)],
+    header: ['Target sheet', 'Design #', ...fields.map((f) => `${f.group}: ${fieldTitle(f)}`)],
+    units: ['', '', ...fields.map((f) => f.unit)],
     digits,
     rows: rows.map((r) =>
-      [rowVerdict(r, sheet), r.designIndex, ...TRADE_FIELDS.map((f) => f.get(r))].map((v, i) => {
+      [rowVerdict(r, sheet), r.designIndex, ...fields.map((f) => f.get(r))].map((v, i) => {
         const d = digits[i];
         return typeof v === 'number' && Number.isFinite(v) && d != null ? round(v, d) : v;
       }),
@@ -70,7 +70,7 @@ export interface AboutInput {
 
 const titleOfKey = (key: string) => {
   if (key === 'designIndex') return 'Design #';
-  const f = TRADE_FIELDS.find((x) => serverKeyOf(x) === key);
+  const f = ALL_TRADE_FIELDS.find((x) => serverKeyOf(x) === key);
   return f ? fieldTitle(f) : key;
 };
 

@@ -5,7 +5,7 @@
  */
 import type { ColDef, ColGroupDef } from 'ag-grid-community';
 import type { LocationQuery, LocationQueryRaw } from 'vue-router';
-import { TRADE_FIELDS, serverKeyOf } from '@shared/trade/trade-fields.ts';
+import { ALL_TRADE_FIELDS, serverKeyOf } from '@shared/trade/trade-fields.ts';
 import { DESIGN_COL_ID } from './trade-columns';
 import type { ViewQuery } from './trade-query';
 
@@ -24,7 +24,7 @@ const one = (v: LocationQuery[string] | undefined): string | null => (Array.isAr
 const isInt = (s: string) => /^\d+$/.test(s);
 
 /** Server keys the table can sort or filter by: the design number and every field the server stores. */
-const SERVER_KEYS = new Set<string>(['designIndex', ...TRADE_FIELDS.map(serverKeyOf).filter((k): k is string => k !== null)]);
+const SERVER_KEYS = new Set<string>(['designIndex', ...ALL_TRADE_FIELDS.map(serverKeyOf).filter((k): k is string => k !== null)]);
 
 function parseRanges(text: string | null): ViewQuery['ranges'] {
   if (!text) return {};
@@ -89,7 +89,7 @@ export function mergeTradeQuery(base: LocationQuery, s: TradeUrlState): Location
 /** A server key back to the grid's column id (they differ only where the server stores a field by another name). */
 export function colIdOf(serverKey: string): string | null {
   if (serverKey === 'designIndex') return DESIGN_COL_ID;
-  return TRADE_FIELDS.find((f) => serverKeyOf(f) === serverKey)?.key ?? null;
+  return ALL_TRADE_FIELDS.find((f) => serverKeyOf(f) === serverKey)?.key ?? null;
 }
 
 /** A view as AG Grid's filter model (number filters) and column sort state, to restore the grid from a URL. */

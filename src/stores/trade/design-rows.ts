@@ -1,11 +1,13 @@
 /**
  * Part of the trade store: designs of the open sweep, paged from the server for the grid and loaded in full (up to
- * a cap) for the charts and the ranking, in the grid's sort and filters and over the sheet's scan window.
+ * a cap) for the charts and the ranking, in the grid's sort and filters and over the sheet's scan window (a device
+ * sweep's rows are its variants' coverage).
  */
 import { ref, shallowRef, type Ref } from 'vue';
 import { sweepsApi } from '@/api/sweeps';
 import { scanWindowParams, type ViewQuery } from '@/api/results-query';
 import type { Page } from '@shared/api/sweeps.ts';
+import type { DeviceSweepAbout } from '@shared/devices/device-sweep-spec.ts';
 import type { SweepCostBasis } from '@shared/cost/cost-model.ts';
 import { MAX_PAGE_ROWS } from '@shared/sweep/results-query.ts';
 import type { TargetSheet } from '@shared/targets/sheet.ts';
@@ -16,7 +18,13 @@ export const CHART_ROW_CAP = 20_000;
 /** Rows per request when loading more than one page (the server's page limit). */
 const BULK_PAGE = MAX_PAGE_ROWS;
 
-export function useDesignRows(sweepId: Ref<string | null>, sheet: Ref<TargetSheet | null>, span: Ref<SteerSpan | null>, fail: (e: unknown) => void) {
+export function useDesignRows(
+  sweepId: Ref<string | null>,
+  sheet: Ref<TargetSheet | null>,
+  span: Ref<SteerSpan | null>,
+  fail: (e: unknown) => void,
+  device: Readonly<Ref<DeviceSweepAbout | null>>,
+) {
   const rows = shallowRef<TradeDesign[]>([]);
   const rowsTotal = ref(0);
   const view = ref<ViewQuery>({ sort: [], ranges: {} });
@@ -26,9 +34,11 @@ export function useDesignRows(sweepId: Ref<string | null>, sheet: Ref<TargetShee
   /** One page of designs in the grid's current sort and filter, with figures over the sheet's scan range. */
   async function fetchPage(q: ViewQuery, offset: number, limit: number): Promise<Page<TradeDesign>> {
     if (!sweepId.value) return { rows: [], total: 0 };
-    const page = await sweepsApi.designs(sweepId.value, q, offset, limit, scanWindowParams(sheet.value));
+    // A device sweep's coverage has no steering to window.
+    const region = device.value?.region ?? null;
+    const page = await sweepsApi.designs(sweepId.value, q, offset, limit, region ? {} : scanWindowParams(sheet.value));
     costBasis.value = page.cost;
-    return { rows: page.rows.map((r) => fromDesignRow(r as DesignRowJson, span.value)), total: page.total };
+    return { rows: page.rows.map((r) => fromDesignRow(r as DesignRowJson, span.value, region)), total: page.total };
   }
 
   /** Every row of a view, up to `cap`, in pages. */
