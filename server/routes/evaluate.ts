@@ -1,9 +1,9 @@
 import { Router } from 'express';
 import type { AppContext } from '../context.ts';
-import { DesignSchema, MAX_DESIGNS_PER_CALL, type Design } from '../../shared/schemas/design.ts';
+import { DesignSchema, MAX_DESIGNS_PER_CALL } from '../../shared/schemas/design.ts';
 import { heavyRequest, workSignal } from '../middleware/heavy-request.ts';
 import { requireAuth, userOf } from '../middleware/require-auth.ts';
-import { validateOneOrMany } from '../middleware/validate-one-or-many.ts';
+import { parsedOneOrMany, validateOneOrMany } from '../middleware/validate-one-or-many.ts';
 import { evaluateDesigns } from '../services/evaluate-service.ts';
 
 /**
@@ -18,7 +18,7 @@ export function evaluateRouter(ctx: AppContext): Router {
     tooMany: `must hold at most ${MAX_DESIGNS_PER_CALL} designs`,
   });
   router.post('/evaluate', requireAuth, heavyRequest(ctx), body, async (req, res) => {
-    const json = await evaluateDesigns(ctx, userOf(req), req.body as Design | Design[], workSignal(req));
+    const json = await evaluateDesigns(ctx, userOf(req), parsedOneOrMany(req, DesignSchema), workSignal(req));
     res.type('application/json').send(json);
   });
   return router;
