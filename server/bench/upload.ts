@@ -16,7 +16,7 @@ function uploadError(err: unknown, limitBytes: number): ApiError | unknown {
 
 /**
  * One optional file in field `file`, held in memory (never written to disk) up to limitBytes; other
- * multipart fields land in req.body as strings. Non-multipart requests pass through untouched.
+ * multipart fields land in req.body, all of them strings. Non-multipart requests pass through untouched.
  */
 export function singleUpload(limitBytes: number): RequestHandler {
   const handle = multer({ storage: multer.memoryStorage(), limits: { fileSize: limitBytes, files: 1, fields: 20, fieldSize: 64 * 1024 } }).single('file');

@@ -21,12 +21,8 @@ import {
   CodesRequestSchema,
   ManualCodesRequestSchema,
   SquintRequestSchema,
-  type CodesRequest,
-  type ManualCodesRequest,
-  type SquintRequest,
 } from '../../shared/bench/api-schemas.ts';
-import type { Calibration } from '../../shared/bench/calibration.ts';
-import { MonteCarloOptionsSchema, type MonteCarloOptions } from '../../shared/bench/monte-carlo-schema.ts';
+import { MonteCarloOptionsSchema } from '../../shared/bench/monte-carlo-schema.ts';
 import { IdParamsSchema } from '../../shared/schemas/study.ts';
 
 const id = validate({ params: IdParamsSchema });
@@ -45,7 +41,7 @@ export function benchRouter(ctx: AppContext): Router {
   const heavy = heavyRequest(ctx);
 
   router.post('/candidates/:id/codes', requireAuth, heavy, id, validate({ body: CodesRequestSchema }), async (req, res) => {
-    res.json(await codesFor(ctx, userOf(req), idOf(req), req.body as CodesRequest, workSignal(req)));
+    res.json(await codesFor(ctx, userOf(req), idOf(req), parsed(req, 'body', CodesRequestSchema), workSignal(req)));
   });
   router.get('/candidates/:id/codes.csv', requireAuth, heavy, id, validate({ query: CodesCsvQuerySchema }), async (req, res) => {
     const { csv, filename } = await codesCsvFor(ctx, userOf(req), idOf(req), parsed(req, 'query', CodesCsvQuerySchema), workSignal(req));
@@ -55,17 +51,17 @@ export function benchRouter(ctx: AppContext): Router {
     res.json(await getCalibration(ctx, userOf(req), idOf(req)));
   });
   router.put('/candidates/:id/calibration', requireRole('engineer'), id, upload, unlessFile(validate({ body: CalibrationPutSchema })), async (req, res) => {
-    const offsets = req.file ? calibrationFromFile(req.file.buffer) : (req.body as { offsets: Calibration }).offsets;
+    const offsets = req.file ? calibrationFromFile(req.file.buffer) : parsed(req, 'body', CalibrationPutSchema).offsets;
     res.json(await putCalibration(ctx, userOf(req), idOf(req), offsets, req.file?.originalname ?? null));
   });
   router.post('/candidates/:id/manual-codes', requireAuth, heavy, id, validate({ body: ManualCodesRequestSchema }), async (req, res) => {
-    res.json(await manualCodes(ctx, userOf(req), idOf(req), req.body as ManualCodesRequest, workSignal(req)));
+    res.json(await manualCodes(ctx, userOf(req), idOf(req), parsed(req, 'body', ManualCodesRequestSchema), workSignal(req)));
   });
   router.post('/candidates/:id/squint', requireAuth, heavy, id, validate({ body: SquintRequestSchema }), async (req, res) => {
-    res.json(await squintFor(ctx, userOf(req), idOf(req), req.body as SquintRequest, workSignal(req)));
+    res.json(await squintFor(ctx, userOf(req), idOf(req), parsed(req, 'body', SquintRequestSchema), workSignal(req)));
   });
   router.post('/candidates/:id/monte-carlo', requireAuth, heavy, id, validate({ body: MonteCarloOptionsSchema }), async (req, res) => {
-    res.json(await monteCarloFor(ctx, userOf(req), idOf(req), req.body as MonteCarloOptions, workSignal(req)));
+    res.json(await monteCarloFor(ctx, userOf(req), idOf(req), parsed(req, 'body', MonteCarloOptionsSchema), workSignal(req)));
   });
   return router;
 }

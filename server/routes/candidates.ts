@@ -2,15 +2,9 @@
 import { Router, type Request } from 'express';
 import type { AppContext } from '../context.ts';
 import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts';
-import { validate } from '../middleware/validate.ts';
+import { parsed, validate } from '../middleware/validate.ts';
 import { createCandidate, deleteCandidate, getCandidate, listCandidates, patchCandidate } from '../services/candidate-service.ts';
-import {
-  CandidateCreateSchema,
-  CandidatePatchSchema,
-  IdParamsSchema,
-  type CandidateCreate,
-  type CandidatePatch,
-} from '../../shared/schemas/study.ts';
+import { CandidateCreateSchema, CandidatePatchSchema, IdParamsSchema } from '../../shared/schemas/study.ts';
 
 const id = validate({ params: IdParamsSchema });
 const idOf = (req: Request) => String(req.params.id);
@@ -22,7 +16,7 @@ export function studyCandidatesRouter(ctx: AppContext): Router {
     res.json(await listCandidates(ctx, userOf(req), idOf(req)));
   });
   router.post('/studies/:id/candidates', requireRole('engineer'), id, validate({ body: CandidateCreateSchema }), async (req, res) => {
-    res.status(201).json(await createCandidate(ctx, userOf(req), idOf(req), req.body as CandidateCreate));
+    res.status(201).json(await createCandidate(ctx, userOf(req), idOf(req), parsed(req, 'body', CandidateCreateSchema)));
   });
   return router;
 }
@@ -33,7 +27,7 @@ export function candidatesRouter(ctx: AppContext): Router {
     res.json(await getCandidate(ctx, userOf(req), idOf(req)));
   });
   router.patch('/candidates/:id', requireRole('engineer'), id, validate({ body: CandidatePatchSchema }), async (req, res) => {
-    res.json(await patchCandidate(ctx, userOf(req), idOf(req), req.body as CandidatePatch));
+    res.json(await patchCandidate(ctx, userOf(req), idOf(req), parsed(req, 'body', CandidatePatchSchema)));
   });
   router.delete('/candidates/:id', requireRole('engineer'), id, async (req, res) => {
     await deleteCandidate(ctx, userOf(req), idOf(req));

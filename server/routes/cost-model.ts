@@ -2,9 +2,9 @@
 import { Router } from 'express';
 import type { AppContext } from '../context.ts';
 import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts';
-import { validate } from '../middleware/validate.ts';
+import { parsed, validate } from '../middleware/validate.ts';
 import { getCostModel, putCostModel } from '../services/cost-model-service.ts';
-import { CostModelSchema, type CostModel } from '../../shared/cost/cost-model.ts';
+import { CostModelSchema } from '../../shared/cost/cost-model.ts';
 import { IdParamsSchema } from '../../shared/schemas/study.ts';
 
 const id = validate({ params: IdParamsSchema });
@@ -15,7 +15,7 @@ export function studyCostModelRouter(ctx: AppContext): Router {
     res.json(await getCostModel(ctx, userOf(req), String(req.params.id)));
   });
   router.put('/studies/:id/cost-model', requireRole('engineer'), id, validate({ body: CostModelSchema }), async (req, res) => {
-    res.json(await putCostModel(ctx, userOf(req), String(req.params.id), req.body as CostModel));
+    res.json(await putCostModel(ctx, userOf(req), String(req.params.id), parsed(req, 'body', CostModelSchema)));
   });
   return router;
 }

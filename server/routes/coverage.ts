@@ -4,7 +4,7 @@ import type { AppContext } from '../context.ts';
 import { coverageQueueFull, runCoverageTask } from '../coverage/coverage-pool.ts';
 import { ApiError } from '../errors.ts';
 import { requireAuth, userOf } from '../middleware/require-auth.ts';
-import { validate } from '../middleware/validate.ts';
+import { parsed, validate } from '../middleware/validate.ts';
 import { resolveElementPatterns } from '../services/element-pattern-service.ts';
 
 /**
@@ -14,7 +14,7 @@ import { resolveElementPatterns } from '../services/element-pattern-service.ts';
 export function coverageRouter(ctx: AppContext): Router {
   const router = Router();
   router.post('/coverage', requireAuth, validate({ body: CoverageRequestSchema }), async (req, res) => {
-    const body = req.body as CoverageInput;
+    const body = parsed(req, 'body', CoverageRequestSchema);
     const designs = await resolveElementPatterns(ctx, { user: userOf(req) }, body.modules.map((m) => m.design), (i) => `modules[${i}].design.element.patternId`);
     const input: CoverageInput = { ...body, modules: body.modules.map((m, i) => ({ ...m, design: designs[i]! })) };
     if (coverageQueueFull()) throw new ApiError(503, 'busy', 'coverage: too many computations waiting; try again shortly');

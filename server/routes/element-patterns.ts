@@ -3,7 +3,7 @@ import { Router, type Request } from 'express';
 import type { AppContext } from '../context.ts';
 import { singleUpload } from '../bench/upload.ts';
 import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts';
-import { validate } from '../middleware/validate.ts';
+import { parsed, validate } from '../middleware/validate.ts';
 import {
   createElementPattern,
   deleteElementPattern,
@@ -22,7 +22,7 @@ export function elementPatternsRouter(ctx: AppContext): Router {
   const upload = singleUpload(ctx.config.UPLOAD_LIMIT_BYTES);
 
   router.post('/studies/:id/element-patterns', requireRole('engineer'), id, upload, validate({ body: ElementPatternUploadSchema }), async (req, res) => {
-    const body = req.body as { name?: string };
+    const body = parsed(req, 'body', ElementPatternUploadSchema);
     res.status(201).json(await createElementPattern(ctx, userOf(req), idOf(req), body.name, req.file));
   });
   router.get('/studies/:id/element-patterns', requireAuth, id, async (req, res) => {

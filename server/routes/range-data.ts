@@ -3,9 +3,9 @@ import { Router, type Request } from 'express';
 import type { AppContext } from '../context.ts';
 import { singleUpload } from '../bench/upload.ts';
 import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts';
-import { validate } from '../middleware/validate.ts';
+import { parsed, validate } from '../middleware/validate.ts';
 import { createRangeUpload, deleteRangeUpload, getRangeUpload, listRangeUploads, rawRangeUpload } from '../services/range-data-service.ts';
-import { RangeUploadFieldsSchema, type RangeUploadFields } from '../../shared/bench/api-schemas.ts';
+import { RangeUploadFieldsSchema } from '../../shared/bench/api-schemas.ts';
 import { IdParamsSchema } from '../../shared/schemas/study.ts';
 
 const id = validate({ params: IdParamsSchema });
@@ -16,7 +16,7 @@ export function rangeDataRouter(ctx: AppContext): Router {
   const upload = singleUpload(ctx.config.UPLOAD_LIMIT_BYTES);
 
   router.post('/candidates/:id/range-data', requireRole('engineer'), id, upload, validate({ body: RangeUploadFieldsSchema }), async (req, res) => {
-    res.status(201).json(await createRangeUpload(ctx, userOf(req), idOf(req), req.body as RangeUploadFields, req.file));
+    res.status(201).json(await createRangeUpload(ctx, userOf(req), idOf(req), parsed(req, 'body', RangeUploadFieldsSchema), req.file));
   });
   router.get('/studies/:id/range-data', requireAuth, id, async (req, res) => {
     res.json(await listRangeUploads(ctx, userOf(req), idOf(req)));
