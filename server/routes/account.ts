@@ -2,7 +2,7 @@ import { Router } from 'express';
 import { ApiTokenBody, PasswordChangeBody, ProfileBody, TokenIdParams } from '../auth/schemas.ts';
 import type { AppContext } from '../context.ts';
 import { requireAuth, userOf } from '../middleware/require-auth.ts';
-import { validate } from '../middleware/validate.ts';
+import { parsed, validate } from '../middleware/validate.ts';
 import { createToken, listTokens, revokeToken } from '../services/api-token-service.ts';
 import { changePassword, updateProfile } from '../services/user-service.ts';
 import { meOf } from '../services/me-service.ts';
@@ -11,11 +11,11 @@ import { meOf } from '../services/me-service.ts';
 export function accountRouter(ctx: AppContext): Router {
   const router = Router();
   router.patch('/account', requireAuth, validate({ body: ProfileBody }), async (req, res) => {
-    const user = await updateProfile(ctx, userOf(req), (req.body as { name: string }).name);
+    const user = await updateProfile(ctx, userOf(req), parsed(req, 'body', ProfileBody).name);
     res.json(await meOf(ctx, user));
   });
   router.put('/account/password', requireAuth, validate({ body: PasswordChangeBody }), async (req, res) => {
-    const body = req.body as { currentPassword: string; newPassword: string };
+    const body = parsed(req, 'body', PasswordChangeBody);
     await changePassword(ctx, userOf(req), body.currentPassword, body.newPassword, req.sessionID);
     res.status(204).end();
   });
@@ -23,7 +23,7 @@ export function accountRouter(ctx: AppContext): Router {
     res.json(await listTokens(ctx, userOf(req)));
   });
   router.post('/account/tokens', requireAuth, validate({ body: ApiTokenBody }), async (req, res) => {
-    res.status(201).json(await createToken(ctx, userOf(req), (req.body as { name: string }).name));
+    res.status(201).json(await createToken(ctx, userOf(req), parsed(req, 'body', ApiTokenBody).name));
   });
   router.delete('/account/tokens/:tokenId', requireAuth, validate({ params: TokenIdParams }), async (req, res) => {
     await revokeToken(ctx, userOf(req), req.params.tokenId as string);

@@ -7,7 +7,7 @@ import { LoginBody, ResetBody, ResetRequestBody, TokenParams } from '../auth/sch
 import { SESSION_COOKIE } from '../auth/session.ts';
 import type { AuthUser } from '../auth/types.ts';
 import type { AppContext } from '../context.ts';
-import { validate } from '../middleware/validate.ts';
+import { parsed, validate } from '../middleware/validate.ts';
 import { audit } from '../services/audit-service.ts';
 import { checkResetLink, requestPasswordReset, resetPassword } from '../services/password-reset-service.ts';
 import { meOf } from '../services/me-service.ts';
@@ -18,9 +18,10 @@ export function authRouter(ctx: AppContext): Router {
   const { passport, csrf } = authKit(ctx);
 
   const signIn: RequestHandler = (req, res, next) => {
+    // Read here, not in passport's callback, so a route missing its validate() throws where Express catches it.
+    const { email } = parsed(req, 'body', LoginBody);
     passport.authenticate('local', (err: unknown, user: AuthUser | false) => {
       if (err) return next(err);
-      const email = (req.body as { email: string }).email;
       if (!user) {
         audit(ctx, null, 'auth.sign_in_failed', null, { email }).then(() => next(InvalidCredentials()), next);
         return;
@@ -49,14 +50,14 @@ export function authRouter(ctx: AppContext): Router {
   router.post('/auth/login', ...signInLimiters(), validate({ body: LoginBody }), signIn);
   router.post('/auth/logout', signOut);
   router.post('/auth/password-reset', mailRequestLimiter(), validate({ body: ResetRequestBody }), async (req, res) => {
-    await requestPasswordReset(ctx, (req.body as { email: string }).email, linkBase(ctx.config, req));
+    await requestPasswordReset(ctx, parsed(req, 'body', ResetRequestBody).email, linkBase(ctx.config, req));
     res.status(202).json({ message: 'If that address has an account, a reset link is on its way. It expires in 1 hour.' });
   });
   router.get('/auth/password-reset/:token', validate({ params: TokenParams }), async (req, res) => {
     res.json(await checkResetLink(ctx, req.params.token as string));
   });
   router.post('/auth/password-reset/:token', validate({ params: TokenParams, body: ResetBody }), async (req, res) => {
-    await resetPassword(ctx, req.params.token as string, (req.body as { password: string }).password);
+    await resetPassword(ctx, req.params.token as string, parsed(req, 'body', ResetBody).password);
     res.status(204).end();
   });
   return router;

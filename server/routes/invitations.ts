@@ -1,7 +1,7 @@
 import { Router, type RequestHandler } from 'express';
 import { AcceptInviteBody, TokenParams } from '../auth/schemas.ts';
 import type { AppContext } from '../context.ts';
-import { validate } from '../middleware/validate.ts';
+import { parsed, validate } from '../middleware/validate.ts';
 import { acceptInvitation, describeInvitation } from '../services/invitation-service.ts';
 import { meOf } from '../services/me-service.ts';
 
@@ -10,7 +10,7 @@ export function invitationsRouter(ctx: AppContext): Router {
   const router = Router();
 
   const accept: RequestHandler = async (req, res, next) => {
-    const user = await acceptInvitation(ctx, req.params.token as string, req.body as { name: string; password: string });
+    const user = await acceptInvitation(ctx, req.params.token as string, parsed(req, 'body', AcceptInviteBody));
     // Signed in straight away, on a fresh session id.
     req.login(user, (err) => {
       if (err) return next(err);

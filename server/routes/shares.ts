@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { SharesBody, StudyIdParams, type SharesInput } from '../auth/schemas.ts';
+import { SharesBody, StudyIdParams } from '../auth/schemas.ts';
 import type { AppContext } from '../context.ts';
 import { requireAuth, userOf } from '../middleware/require-auth.ts';
 import { parsed, validate } from '../middleware/validate.ts';
@@ -12,7 +12,7 @@ export function sharesRouter(ctx: AppContext): Router {
     res.json(await getShares(ctx, userOf(req), parsed(req, 'params', StudyIdParams).studyId));
   });
   router.put('/studies/:studyId/shares', requireAuth, validate({ params: StudyIdParams, body: SharesBody }), async (req, res) => {
-    res.json(await putShares(ctx, userOf(req), parsed(req, 'params', StudyIdParams).studyId, req.body as SharesInput));
+    res.json(await putShares(ctx, userOf(req), parsed(req, 'params', StudyIdParams).studyId, parsed(req, 'body', SharesBody)));
   });
   return router;
 }

@@ -22,9 +22,6 @@ import {
   StudyExportSchema,
   StudyListQuerySchema,
   StudyPatchSchema,
-  type StudyCreate,
-  type StudyExport,
-  type StudyPatch,
 } from '../../shared/schemas/study.ts';
 
 const id = validate({ params: IdParamsSchema });
@@ -42,16 +39,16 @@ export function studiesRouter(ctx: AppContext): Router {
     res.json(await listStudies(ctx, userOf(req), parsed(req, 'query', StudyListQuerySchema)));
   });
   router.post('/studies', requireRole('engineer'), validate({ body: StudyCreateSchema }), async (req, res) => {
-    res.status(201).json(await createStudy(ctx, userOf(req), req.body as StudyCreate));
+    res.status(201).json(await createStudy(ctx, userOf(req), parsed(req, 'body', StudyCreateSchema)));
   });
   router.post('/studies/import', requireRole('engineer'), validate({ body: StudyExportSchema }), async (req, res) => {
-    res.status(201).json(await importStudy(ctx, userOf(req), req.body as StudyExport));
+    res.status(201).json(await importStudy(ctx, userOf(req), parsed(req, 'body', StudyExportSchema)));
   });
   router.get('/studies/:id', requireAuth, id, async (req, res) => {
     res.json(await getStudy(ctx, userOf(req), idOf(req)));
   });
   router.patch('/studies/:id', requireRole('engineer'), id, validate({ body: StudyPatchSchema }), async (req, res) => {
-    res.json(await patchStudy(ctx, userOf(req), idOf(req), req.body as StudyPatch));
+    res.json(await patchStudy(ctx, userOf(req), idOf(req), parsed(req, 'body', StudyPatchSchema)));
   });
   router.delete('/studies/:id', requireRole('engineer'), id, async (req, res) => {
     await deleteStudy(ctx, userOf(req), idOf(req));

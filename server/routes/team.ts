@@ -2,9 +2,8 @@ import { Router } from 'express';
 import { linkBase } from '../auth/links.ts';
 import { InvitationIdParams, InviteBody, RoleBody, UserIdParams } from '../auth/schemas.ts';
 import type { AppContext } from '../context.ts';
-import type { TeamRole } from '../entities/user.ts';
 import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts';
-import { validate } from '../middleware/validate.ts';
+import { parsed, validate } from '../middleware/validate.ts';
 import { inviteMember, listInvitations, revokeInvitation } from '../services/invitation-service.ts';
 import { changeRole, getTeam, removeMember } from '../services/team-service.ts';
 
@@ -16,7 +15,7 @@ export function teamRouter(ctx: AppContext): Router {
     res.json(await getTeam(ctx, userOf(req)));
   });
   router.patch('/team/members/:userId', admin, validate({ params: UserIdParams, body: RoleBody }), async (req, res) => {
-    res.json(await changeRole(ctx, userOf(req), req.params.userId as string, (req.body as { role: TeamRole }).role));
+    res.json(await changeRole(ctx, userOf(req), req.params.userId as string, parsed(req, 'body', RoleBody).role));
   });
   router.delete('/team/members/:userId', admin, validate({ params: UserIdParams }), async (req, res) => {
     await removeMember(ctx, userOf(req), req.params.userId as string);
@@ -26,7 +25,7 @@ export function teamRouter(ctx: AppContext): Router {
     res.json(await listInvitations(ctx, userOf(req)));
   });
   router.post('/team/invitations', admin, validate({ body: InviteBody }), async (req, res) => {
-    const body = req.body as { email: string; role: TeamRole };
+    const body = parsed(req, 'body', InviteBody);
     res.status(201).json(await inviteMember(ctx, userOf(req), body, linkBase(ctx.config, req)));
   });
   router.delete('/team/invitations/:invitationId', admin, validate({ params: InvitationIdParams }), async (req, res) => {
