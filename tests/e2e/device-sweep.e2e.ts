@@ -1,0 +1,56 @@
+/**
+ * A sweep over a device from the Devices tab: vary the demo phone's first module's power per channel, follow the
+ * stored sweep's progress on the card, then open it in the trade table and find the coverage columns, the line
+ * naming the device and the module, and the coverage cautions. Checked with axe-core like every page.
+ */
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { accessibilityProblems } from './helpers/axe.ts';
+import { launch, openPage, screenshot } from './helpers/browser.ts';
+import { demoStudyId, settle, signInAs, unexpected } from './helpers/session.ts';
+
+let browser: Browser;
+const appUrl = inject('appUrl');
+
+beforeAll(async () => {
+  browser = await launch();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe('a sweep over a device', () => {
+  it('starts from the device card, runs on the server and opens in the trade table with its coverage columns', { timeout: 180_000 }, async () => {
+    const { page, problems } = await openPage(browser);
+    await signInAs(page, appUrl, 'engineer');
+    const studyId = await demoStudyId(page, appUrl);
+    await page.goto(`${appUrl}/studies/${studyId}#devices`);
+    await page.locator('[data-test="device-sketch"]').waitFor();
+    await page.getByText('Kestrel phone: two edge modules').first().click();
+    const card = page.locator('[data-test="device-sweep"]');
+    await card.getByLabel('Name of the device sweep').fill('Journey: phone power');
+    await card.getByLabel('Values of power per channel (dBm)').fill('8, 12');
+    await expect.poll(() => card.locator('[data-test="variant-count"]').innerText()).toBe('2 variants');
+    await card.getByRole('button', { name: 'Run device sweep' }).click();
+    await expect.poll(() => card.innerText(), { timeout: 120_000 }).toContain('2 of 2 points');
+    await card.locator('[data-test="device-sweep-link"]').click();
+
+    await page.locator('[data-test="device-sweep-about"]').waitFor();
+    expect(await page.locator('[data-test="device-sweep-about"]').innerText()).toMatch(/Kestrel phone: two edge modules.*module M1 varied \(channelPowerDbm 8, 12\)/);
+    await expect.poll(() => page.locator('[data-test="coverage-cautions"]').innerText()).toMatch(/hand, the head and the device's own housing/);
+    const headers = page.locator('.ag-header-cell-text');
+    await expect.poll(async () => (await headers.allInnerTexts()).join(' | ')).toContain('EIRP at the 50th percentile (dBm)');
+    expect((await headers.allInnerTexts()).join(' | ')).toContain('Channel power (dBm)');
+    // One row per variant, each with its 50th-percentile EIRP (AG Grid splits a row across pinned and centre parts).
+    await expect.poll(() => page.locator('.ag-cell[col-id="designIndex"]').count()).toBe(2);
+    const p50 = await page.locator('.ag-cell[col-id="p50EirpDbm"]').allInnerTexts();
+    expect(p50).toHaveLength(2);
+    for (const text of p50) expect(text).toMatch(/^-?\d+\.\d$/);
+    await page.mouse.move(0, 0);
+    await settle(page);
+    await screenshot(page, 'device-sweep-trade-table');
+    expect(await accessibilityProblems(page, 'device-sweep-trade-table')).toEqual([]);
+    expect(unexpected(problems)).toEqual([]);
+    await page.context().close();
+  });
+});
