@@ -10,7 +10,8 @@ const majorMinor = (v: string): [number, number] | null => {
   return m ? [Number(m[1]), Number(m[2])] : null;
 };
 
-export function olderEngineNote(sweepEngineVersion: string, current: string = ENGINE_VERSION): string | null {
+export function olderEngineNote(sweepEngineVersion: string | null | undefined, current: string = ENGINE_VERSION): string | null {
+  if (!sweepEngineVersion) return null;
   const was = majorMinor(sweepEngineVersion);
   const now = majorMinor(current);
   if (!was || !now || was[0] > now[0] || (was[0] === now[0] && was[1] >= now[1])) return null;

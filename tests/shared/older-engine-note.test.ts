@@ -9,5 +9,6 @@ describe('olderEngineNote', () => {
     expect(olderEngineNote('1.1.7', '1.1.0')).toBeNull(); // a patch changes no definition
     expect(olderEngineNote('1.2.0', '1.1.0')).toBeNull(); // newer than this server: nothing to say here
     expect(olderEngineNote('unknown', '1.1.0')).toBeNull();
+    expect(olderEngineNote(undefined, '1.1.0')).toBeNull(); // a list row without the version
   });
 });
