@@ -6,7 +6,7 @@ import { parsed, validate } from '../middleware/validate.ts';
 import { createDevice, deleteDevice, getDevice, listDevices, patchDevice } from '../services/device-service.ts';
 import { createDeviceSweep } from '../services/device-sweep-service.ts';
 import { DeviceSweepRequestSchema } from '../../shared/devices/device-sweep.ts';
-import { DeviceCreateSchema, DevicePatchSchema, type DeviceCreate, type DevicePatch } from '../../shared/schemas/device.ts';
+import { DeviceCreateSchema, DevicePatchSchema } from '../../shared/schemas/device.ts';
 import { IdParamsSchema } from '../../shared/schemas/study.ts';
 
 const id = validate({ params: IdParamsSchema });
@@ -19,7 +19,7 @@ export function studyDevicesRouter(ctx: AppContext): Router {
     res.json(await listDevices(ctx, userOf(req), idOf(req)));
   });
   router.post('/studies/:id/devices', requireRole('engineer'), id, validate({ body: DeviceCreateSchema }), async (req, res) => {
-    res.status(201).json(await createDevice(ctx, userOf(req), idOf(req), req.body as DeviceCreate));
+    res.status(201).json(await createDevice(ctx, userOf(req), idOf(req), parsed(req, 'body', DeviceCreateSchema)));
   });
   return router;
 }
@@ -30,7 +30,7 @@ export function devicesRouter(ctx: AppContext): Router {
     res.json(await getDevice(ctx, userOf(req), idOf(req)));
   });
   router.patch('/devices/:id', requireRole('engineer'), id, validate({ body: DevicePatchSchema }), async (req, res) => {
-    res.json(await patchDevice(ctx, userOf(req), idOf(req), req.body as DevicePatch));
+    res.json(await patchDevice(ctx, userOf(req), idOf(req), parsed(req, 'body', DevicePatchSchema)));
   });
   // A stored sweep in the device's study, run by the sweep runner like any sweep (progress, cancel, results: /api/sweeps/:id).
   router.post('/devices/:id/sweeps', requireRole('engineer'), id, validate({ body: DeviceSweepRequestSchema }), async (req, res) => {

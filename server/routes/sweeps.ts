@@ -4,7 +4,7 @@
  */
 import { Router, type Request } from 'express';
 import { DesignsQuerySchema, PointsQuerySchema, SteerSpanQuerySchema } from '../../shared/sweep/results-query.ts';
-import { SweepIdParamsSchema, SweepRequestSchema, type SweepRequest } from '../../shared/sweep/request.ts';
+import { SweepIdParamsSchema, SweepRequestSchema } from '../../shared/sweep/request.ts';
 import type { AppContext } from '../context.ts';
 import { eventStreamSlot, streamProgress } from '../sweeps/progress-stream.ts';
 import { requireAuth, requireRole, userOf } from '../middleware/require-auth.ts';
@@ -19,7 +19,7 @@ const idOf = (req: Request) => String(req.params.id);
 export function sweepsRouter(ctx: AppContext): Router {
   const router = Router();
   router.post('/studies/:id/sweeps', requireRole('engineer'), id, validate({ body: SweepRequestSchema }), async (req, res) => {
-    res.status(201).json(await createSweep(ctx, userOf(req), idOf(req), req.body as SweepRequest));
+    res.status(201).json(await createSweep(ctx, userOf(req), idOf(req), parsed(req, 'body', SweepRequestSchema)));
   });
   router.get('/studies/:id/sweeps', requireAuth, id, async (req, res) => {
     res.json(await listSweeps(ctx, userOf(req), idOf(req)));
