@@ -80,7 +80,8 @@ export async function searchDesigns(ctx: AppContext, user: AuthUser, studyId: st
   };
   const own = terms.map((t) => termSql(t, bind));
   const alternatives = [own.length ? own.join(' AND ') : 'true', ...byName.map((c) => sameParamsSql(c.design as Design, bind))];
-  const where = `s.study_id = $1 AND s.status = 'done' AND (${alternatives.map((a) => `(${a})`).join(' OR ')})`;
+  // A device sweep's rows are variants of a whole device, judged by coverage: not module designs to sign off.
+  const where = `s.study_id = $1 AND s.status = 'done' AND s.device IS NULL AND (${alternatives.map((a) => `(${a})`).join(' OR ')})`;
   const from = `FROM sweep_designs d JOIN sweeps s ON s.id = d.sweep_id WHERE ${where}`;
   const [{ total }] = (await ctx.db.query(`SELECT count(*)::int AS total ${from}`, params)) as [{ total: number }];
   const rows = (await ctx.db.query(

@@ -47,11 +47,16 @@ interface StoredInputs {
   conducted_power_dbm: number | null;
 }
 
-/** Re-prices the designs after `after` (design index), one batch; answers the last index done, or null at the end. */
+/**
+ * Re-prices the designs after `after` (design index), one batch; answers the last index done, or null at the end.
+ * A device sweep's rows are variants of a whole device, not module designs the model prices: none are re-priced
+ * (their sweep still moves to the current model version, so it never reads as behind).
+ */
 async function repriceBatch(m: EntityManager, sweepId: string, after: number, model: CostModel | null): Promise<number | null> {
   const rows = (await m.query(
     `SELECT design_index, nx, ny, channels, aperture_x_mm, aperture_y_mm, conducted_power_dbm FROM sweep_designs
-     WHERE sweep_id = $1 AND design_index > $2 ORDER BY design_index LIMIT ${BATCH}`,
+     WHERE sweep_id = $1 AND design_index > $2 AND NOT EXISTS (SELECT 1 FROM sweeps WHERE id = $1 AND device IS NOT NULL)
+     ORDER BY design_index LIMIT ${BATCH}`,
     [sweepId, after],
   )) as StoredInputs[];
   if (rows.length === 0) return null;

@@ -10,6 +10,7 @@ import type { AppContext } from '../../server/context.ts';
 import { Study } from '../../server/entities/study.ts';
 import { startSweepRunner, type SweepRunner } from '../../server/sweeps/runner.ts';
 import { COVERAGE_CAUTIONS, computeCoverage, gridCodebook } from '../../shared/coverage/index.ts';
+import { DEMO_COST_MODEL } from '../../shared/cost/index.ts';
 import type { CoverageResult } from '../../shared/coverage/coverage-result.ts';
 import { CoverageRequestSchema } from '../../shared/schemas/coverage.ts';
 import { DesignSchema, type Design } from '../../shared/schemas/design.ts';
@@ -175,6 +176,21 @@ describe('a sweep over a device', () => {
     expect(windowed.rows.map((r: { p50EirpDbm: number }) => r.p50EirpDbm)).toEqual(
       [...all].sort((a, b) => a.designIndex - b.designIndex).map((r) => r.p50EirpDbm),
     );
+  });
+
+  it('is not offered for sign-off as module designs, and a cost-model save leaves its rows unpriced', async () => {
+    const search = must(await reviewer.get(`/api/studies/${studyId}/design-search?q=&limit=50`), 200) as { hits: { kind: string; key: string }[] };
+    expect(search.hits.filter((h) => h.key.startsWith(`sweep:${sweepId}:`))).toEqual([]);
+    const refused = await reviewer.post(`/api/studies/${studyId}/decisions`).send({ design: `${sweepId}:0`, rationale: 'Best P50.', sign: false });
+    expect(refused.status).toBe(400);
+    expect(refused.body.error.fields[0].field).toBe('design');
+    expect(refused.body.error.message).toMatch(/^design: is a variant of a device sweep/);
+    // Module prices do not apply to a device's variants: none is written, and the sweep is not left "behind".
+    must(await engineer.put(`/api/studies/${studyId}/cost-model`).send(DEMO_COST_MODEL), 200);
+    const [{ priced }] = (await ctx.db.query(`SELECT count(cost_usd)::int AS priced FROM sweep_designs WHERE sweep_id = $1`, [sweepId])) as [{ priced: number }];
+    expect(priced).toBe(0);
+    const page = must(await reviewer.get(`/api/sweeps/${sweepId}/designs?limit=1`), 200) as { cost: { current: boolean } };
+    expect(page.cost.current).toBe(true);
   });
 
   it('judges over the sheet\'s service sector when the device names a small-cell sheet', { timeout: 120_000 }, async () => {
