@@ -36,12 +36,14 @@ export async function listDesigns(ctx: AppContext, sweep: Sweep, q: ResultsQuery
   const windowed = !sweep.device && (q.scanAz || q.scanEl);
   const prefix = windowed ? windowedDesignsCte(q.scanAz, q.scanEl, params) : '';
   const source = windowed ? 'windowed' : 'sweep_designs';
+  // The cost basis first: a re-pricing commits rows and version together, so a basis read as current means the rows
+  // read after it are priced by that model (read the other way round, a page could say current over older prices).
+  const cost = await sweepCostBasis(ctx.db.manager, sweep.id);
   const [{ total }] = (await ctx.db.query(`${prefix}SELECT count(*)::int AS total FROM ${source} WHERE ${where}`, params)) as [{ total: number }];
   const rows = (await ctx.db.query(
     `${prefix}SELECT ${select(DESIGN_COLUMNS)}, design FROM ${source} WHERE ${where} ORDER BY ${order} LIMIT ${q.limit} OFFSET ${q.offset}`,
     params,
   )) as DesignRow[];
-  const cost = await sweepCostBasis(ctx.db.manager, sweep.id);
   // Figures behind the study's model (a re-pricing cut short by a restart) are brought up to date in the background.
   if (!cost.current && cost.currentVersion !== null) void scheduleReprice(ctx.db, ctx.log, sweep.studyId);
   return { total, rows, cost };
