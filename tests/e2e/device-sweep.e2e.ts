@@ -1,7 +1,8 @@
 /**
  * A sweep over a device from the Devices tab: vary the demo phone's first module's power per channel, follow the
  * stored sweep's progress on the card, then open it in the trade table and find the coverage columns, the line
- * naming the device and the module, and the coverage cautions. Checked with axe-core like every page.
+ * naming the device and the module, and the coverage cautions; then its charts (the varied parameter against the
+ * coverage figures). Checked with axe-core like every page.
  */
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
@@ -50,6 +51,21 @@ describe('a sweep over a device', () => {
     await settle(page);
     await screenshot(page, 'device-sweep-trade-table');
     expect(await accessibilityProblems(page, 'device-sweep-trade-table')).toEqual([]);
+
+    // The charts of a device sweep: its varied parameter against its coverage, one mark per variant, and no module charts.
+    const charts = page.getByRole('tab', { name: 'Charts', exact: true }).first();
+    await charts.click();
+    await expect.poll(() => charts.getAttribute('aria-selected')).toBe('true');
+    await page.locator('[data-test="device-charts-note"]').waitFor();
+    await expect.poll(() => page.locator('circle.mark').count(), { timeout: 15_000 }).toBe(2);
+    expect(await page.getByRole('figure').count()).toBe(1);
+    const scatter = page.getByRole('figure').first();
+    expect(await scatter.innerText()).toMatch(/Channel power \(dBm\)/);
+    expect(await scatter.innerText()).toMatch(/EIRP at the 50th percentile \(dBm\)/);
+    await page.mouse.move(0, 0);
+    await settle(page);
+    await screenshot(page, 'device-sweep-charts');
+    expect(await accessibilityProblems(page, 'device-sweep-charts')).toEqual([]);
     expect(unexpected(problems)).toEqual([]);
     await page.context().close();
   });
