@@ -4,25 +4,17 @@
  * naming the device and the module, and the coverage cautions; then its charts (the varied parameter against the
  * coverage figures). Checked with axe-core like every page.
  */
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { describe, expect, inject, it } from 'vitest';
 import { accessibilityProblems } from './helpers/axe.ts';
-import { launch, openPage, screenshot } from './helpers/browser.ts';
+import { openPage, screenshot, useBrowser } from './helpers/browser.ts';
 import { demoStudyId, settle, signInAs, unexpected } from './helpers/session.ts';
 
-let browser: Browser;
+const browser = useBrowser();
 const appUrl = inject('appUrl');
-
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
 
 describe('a sweep over a device', () => {
   it('starts from the device card, runs on the server and opens in the trade table with its coverage columns', { timeout: 180_000 }, async () => {
-    const { page, problems } = await openPage(browser);
+    const { page, problems } = await openPage(browser());
     await signInAs(page, appUrl, 'engineer');
     const studyId = await demoStudyId(page, appUrl);
     await page.goto(`${appUrl}/studies/${studyId}#devices`);

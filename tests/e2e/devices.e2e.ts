@@ -4,26 +4,18 @@
  * percentile markers, and the coverage map. Checked with axe-core like every page. A second device, whose module is a
  * candidate on an uploaded element pattern, computes in the browser too (its pattern values fetched first).
  */
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { describe, expect, inject, it } from 'vitest';
 import { accessibilityProblems } from './helpers/axe.ts';
-import { launch, openPage, screenshot } from './helpers/browser.ts';
+import { openPage, screenshot, useBrowser } from './helpers/browser.ts';
 import { starterLayout } from '../../shared/schemas/device.ts';
 import { demoStudyId, settle, signInAs, unexpected } from './helpers/session.ts';
 
-let browser: Browser;
+const browser = useBrowser();
 const appUrl = inject('appUrl');
-
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
 
 describe('devices', () => {
   it('computes the demo phone\'s coverage with a progress bar and shows the CDF, the map and the cautions', { timeout: 180_000 }, async () => {
-    const { page, problems } = await openPage(browser);
+    const { page, problems } = await openPage(browser());
     await signInAs(page, appUrl, 'engineer');
     const studyId = await demoStudyId(page, appUrl);
     await page.goto(`${appUrl}/studies/${studyId}#devices`);
@@ -50,7 +42,7 @@ describe('devices', () => {
   });
 
   it('computes a device whose module uses an uploaded element pattern', { timeout: 180_000 }, async () => {
-    const { page, problems } = await openPage(browser);
+    const { page, problems } = await openPage(browser());
     await signInAs(page, appUrl, 'engineer');
     const studyId = await demoStudyId(page, appUrl);
     // Set up through the API as another tool would: a candidate on the seeded demo pattern, and a device using it.

@@ -4,20 +4,13 @@
  * open the charts. Screenshots of each step go to screenshots/journey-*.png.
  */
 import { readFileSync } from 'node:fs';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { launch, openPage, screenshot } from './helpers/browser.ts';
+import type { Page } from 'playwright-core';
+import { describe, expect, inject, it } from 'vitest';
+import { openPage, screenshot, useBrowser } from './helpers/browser.ts';
 import { settle, signInAs, unexpected } from './helpers/session.ts';
 
-let browser: Browser;
+const browser = useBrowser();
 const appUrl = inject('appUrl');
-
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
 
 /** The value shown beside a label in the preview's metrics table. */
 const metric = (page: Page, label: string) =>
@@ -32,7 +25,7 @@ async function openTab(page: Page, name: string): Promise<void> {
 
 describe('the main job, end to end', () => {
   it('from sign-in to a finished sweep, its trade table, a CSV and the charts', { timeout: 180_000 }, async () => {
-    const { page, problems } = await openPage(browser);
+    const { page, problems } = await openPage(browser());
     await signInAs(page, appUrl, 'engineer');
 
     // A new study, opened at once.

@@ -2,21 +2,14 @@
  * Every page of the app opens without console errors and without serious or critical accessibility violations
  * (axe-core, plus unique element ids), with a screenshot of each in screenshots/.
  */
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, inject, it } from 'vitest';
 import { accessibilityProblems } from './helpers/axe.ts';
-import { launch, openPage, screenshot } from './helpers/browser.ts';
+import { openPage, screenshot, useBrowser } from './helpers/browser.ts';
 import { demoStudyId, settle, signInAs, unexpected } from './helpers/session.ts';
 
-let browser: Browser;
+const browser = useBrowser();
 const appUrl = inject('appUrl');
-
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
 
 /** Accessibility problems of every page visited, reported together at the end of each test. */
 let a11y: string[] = [];
@@ -37,7 +30,7 @@ const heading = (name: string | RegExp) => (p: Page) => p.getByRole('heading', {
 describe('every page opens without console errors', () => {
   it('signed out: sign-in, forgot password, a bad reset link, a bad invitation link, 404', async () => {
     a11y = [];
-    const { page, problems } = await openPage(browser);
+    const { page, problems } = await openPage(browser());
     const found: Record<string, string[]> = {};
     found['sign-in'] = await visit(page, problems, '/sign-in', 'page-sign-in', heading('Sign in'));
     found.forgot = await visit(page, problems, '/forgot-password', 'page-forgot-password', heading('Reset your password'));
@@ -55,7 +48,7 @@ describe('every page opens without console errors', () => {
   // An accessibility check per page and tab takes a few seconds each on a loaded machine: a budget, not a speed check.
   it('signed in as the admin: studies, every tab of the demo study, packet, account, team, outbox', { timeout: 400_000 }, async () => {
     a11y = [];
-    const { page, problems } = await openPage(browser);
+    const { page, problems } = await openPage(browser());
     await signInAs(page, appUrl, 'admin');
     const studyId = await demoStudyId(page, appUrl);
     const found: Record<string, string[]> = {};

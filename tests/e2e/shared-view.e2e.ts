@@ -3,21 +3,14 @@
  * and find the same view; open the copied link in a fresh page and find it again. The studies list opens a study on
  * one click of its name. Every page visited is checked with axe-core (serious and critical violations fail).
  */
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, inject, it } from 'vitest';
 import { accessibilityProblems } from './helpers/axe.ts';
-import { launch, openPage, screenshot } from './helpers/browser.ts';
+import { openPage, screenshot, useBrowser } from './helpers/browser.ts';
 import { demoStudyId, settle, signInAs, unexpected } from './helpers/session.ts';
 
-let browser: Browser;
+const browser = useBrowser();
 const appUrl = inject('appUrl');
-
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
 
 /** Distinct grid rows holding cells (AG Grid splits a row across its pinned and centre parts). */
 const rowCount = (page: Page) =>
@@ -37,7 +30,7 @@ const tickBox = (page: Page, d: number) =>
 
 describe('a trade view kept in its URL', () => {
   it('reloads to the same filtered, sorted, ticked table, and a copied link opens it in a fresh page', { timeout: 180_000 }, async () => {
-    const { page, problems } = await openPage(browser);
+    const { page, problems } = await openPage(browser());
     await page.context().grantPermissions(['clipboard-read', 'clipboard-write'], { origin: appUrl });
     const a11y: string[] = [];
     await signInAs(page, appUrl, 'engineer');

@@ -1,22 +1,14 @@
 /** Signing in and out with a demo account, and a wrong password refused with a message a person can act on. */
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { launch, openPage, screenshot } from './helpers/browser.ts';
+import { describe, expect, inject, it } from 'vitest';
+import { openPage, screenshot, useBrowser } from './helpers/browser.ts';
 import { demoUser, signInAs, signOut, unexpected } from './helpers/session.ts';
 
-let browser: Browser;
+const browser = useBrowser();
 const appUrl = inject('appUrl');
-
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
 
 describe('sign-in', () => {
   it('signs a demo engineer in and out', async () => {
-    const { page, problems } = await openPage(browser);
+    const { page, problems } = await openPage(browser());
     await signInAs(page, appUrl, 'engineer');
     await expect.poll(() => page.getByRole('button', { name: `Account menu for ${demoUser('engineer').name}` }).isVisible()).toBe(true);
     await screenshot(page, 'sign-in-01-signed-in');
@@ -32,7 +24,7 @@ describe('sign-in', () => {
   });
 
   it('refuses a wrong password with a clear message and stays on the sign-in page', async () => {
-    const { page, problems } = await openPage(browser);
+    const { page, problems } = await openPage(browser());
     await page.goto(`${appUrl}/sign-in`);
     await page.getByLabel('E-mail').fill(demoUser('reviewer').email);
     await page.getByLabel('Password').fill('not-the-password-at-all');

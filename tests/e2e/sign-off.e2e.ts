@@ -5,20 +5,13 @@
  * sees the form cleared, the signed design and the whole trail; the owner gets the sign-off mail; the packet shows the
  * trail and the decision's own sweep. Screenshots of each step go to screenshots/sign-off-*.png.
  */
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { launch, openPage, screenshot } from './helpers/browser.ts';
+import type { Page } from 'playwright-core';
+import { describe, expect, inject, it } from 'vitest';
+import { openPage, screenshot, useBrowser } from './helpers/browser.ts';
 import { demoStudyId, demoUser, settle, signInAs, signOut, unexpected } from './helpers/session.ts';
 
-let browser: Browser;
+const browser = useBrowser();
 const appUrl = inject('appUrl');
-
-beforeAll(async () => {
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-});
 
 /**
  * The plain text of the newest message to the signed-in person whose subject starts with `subject`, read from the
@@ -33,7 +26,7 @@ async function mailText(page: Page, subject: string): Promise<string> {
 
 describe("the reviewer's day", () => {
   it('from a request with a note to a confirmed sign-off of design #33, the trail, the mail and the packet', { timeout: 240_000 }, async () => {
-    const { page, problems } = await openPage(browser);
+    const { page, problems } = await openPage(browser());
     // Which request a console 4xx came from, so a failure names it.
     const refused: string[] = [];
     page.on('response', (r) => {

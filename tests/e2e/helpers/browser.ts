@@ -2,6 +2,7 @@
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
+import { afterAll, beforeAll } from 'vitest';
 
 export const SCREENSHOT_DIR = path.resolve('screenshots');
 
@@ -11,6 +12,21 @@ export async function launch(): Promise<Browser> {
     headless: true,
     args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
   });
+}
+
+/** One Chromium for the calling test file: launched before its tests, closed after them. Call at the file's top. */
+export function useBrowser(): () => Browser {
+  let browser: Browser | undefined;
+  beforeAll(async () => {
+    browser = await launch();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+  return () => {
+    if (!browser) throw new Error('the browser is launched in beforeAll: call it from a test');
+    return browser;
+  };
 }
 
 /** A page that records console errors and failed requests so a journey can assert there were none. */
