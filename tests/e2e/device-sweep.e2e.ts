@@ -6,20 +6,16 @@
  */
 import { describe, expect, inject, it } from 'vitest';
 import { accessibilityProblems } from './helpers/axe.ts';
-import { openPage, screenshot, useBrowser } from './helpers/browser.ts';
-import { demoStudyId, settle, signInAs, unexpected } from './helpers/session.ts';
+import { screenshot, useBrowser } from './helpers/browser.ts';
+import { openDemoDevice } from './helpers/devices.ts';
+import { settle, unexpected } from './helpers/session.ts';
 
 const browser = useBrowser();
 const appUrl = inject('appUrl');
 
 describe('a sweep over a device', () => {
   it('starts from the device card, runs on the server and opens in the trade table with its coverage columns', { timeout: 180_000 }, async () => {
-    const { page, problems } = await openPage(browser());
-    await signInAs(page, appUrl, 'engineer');
-    const studyId = await demoStudyId(page, appUrl);
-    await page.goto(`${appUrl}/studies/${studyId}#devices`);
-    await page.locator('[data-test="device-sketch"]').waitFor();
-    await page.getByText('Kestrel phone: two edge modules').first().click();
+    const { page, problems } = await openDemoDevice(browser(), appUrl, 'Kestrel phone: two edge modules');
     const card = page.locator('[data-test="device-sweep"]');
     await card.getByLabel('Name of the device sweep').fill('Journey: phone power');
     await card.getByLabel('Values of power per channel (dBm)').fill('8, 12');

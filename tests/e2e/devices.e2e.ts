@@ -7,6 +7,7 @@
 import { describe, expect, inject, it } from 'vitest';
 import { accessibilityProblems } from './helpers/axe.ts';
 import { openPage, screenshot, useBrowser } from './helpers/browser.ts';
+import { openDemoDevice } from './helpers/devices.ts';
 import { starterLayout } from '../../shared/schemas/device.ts';
 import { demoStudyId, settle, signInAs, unexpected } from './helpers/session.ts';
 
@@ -15,12 +16,7 @@ const appUrl = inject('appUrl');
 
 describe('devices', () => {
   it('computes the demo phone\'s coverage with a progress bar and shows the CDF, the map and the cautions', { timeout: 180_000 }, async () => {
-    const { page, problems } = await openPage(browser());
-    await signInAs(page, appUrl, 'engineer');
-    const studyId = await demoStudyId(page, appUrl);
-    await page.goto(`${appUrl}/studies/${studyId}#devices`);
-    await page.locator('[data-test="device-sketch"]').waitFor();
-    await page.getByText('Kestrel phone: two edge modules').first().click();
+    const { page, problems } = await openDemoDevice(browser(), appUrl, 'Kestrel phone: two edge modules');
     await expect.poll(() => page.locator('[data-test="device-sketch"] [data-module]').count()).toBe(2);
     await page.locator('[data-test="compute-coverage"]').click();
     await page.locator('[data-test="coverage-progress"]').waitFor();
