@@ -125,6 +125,8 @@ describe('the main job, end to end', () => {
     await boxes.nth(0).check();
     await boxes.nth(1).check();
 
+    // A production build: no AG Grid development panel over the table.
+    expect(await page.locator('.ag-overlay-error-panel').count()).toBe(0);
     await openTab(page, 'Charts');
     const figures = page.getByRole('figure');
     await expect.poll(() => figures.count(), { timeout: 15_000 }).toBeGreaterThanOrEqual(4);
