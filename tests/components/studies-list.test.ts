@@ -22,7 +22,7 @@ describe('the studies list', () => {
       expect(c.maxWidth, id).toBeGreaterThan(300);
     }
     const sheet = cols.find((c) => c.colId === 'targetSheet')!;
-    const tip = sheet.tooltipValueGetter!({ value: row.targetSheetName, valueFormatted: null, data: row } as never);
+    const tip = (sheet.tooltip as (p: never) => unknown)({ value: row.targetSheetName, valueFormatted: null, data: row } as never);
     expect(tip).toBe(row.targetSheetName);
   });
 

@@ -23,7 +23,7 @@ const passing = tradeRow(5, { channels: 4, worstSllDb: -14 });
 describe('which limit a fail misses', () => {
   it('the status cell of a failing design lists each failed limit with its margin on hover; a pass has no tooltip', () => {
     const status = leafColumns(tradeColumns({ sheet })).find((c) => c.colId === STATUS_COL_ID) as ColDef<TradeDesign>;
-    const tip = status.tooltipValueGetter!;
+    const tip = status.tooltip as (p: never) => unknown;
     const text = String(tip({ data: failing, value: 'fail' } as never));
     expect(text.split('\n')).toEqual(['Max channels: 16, needs at most 8: 8 over', 'Max side-lobe level (dB): -11.2 dB, needs at most -13 dB: 1.8 dB over']);
     expect(tip({ data: passing, value: 'pass' } as never)).toBeNull();

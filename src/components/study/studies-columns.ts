@@ -67,7 +67,7 @@ export function studiesColumns(now: () => Date = () => new Date()): ColDef<Study
       valueGetter: (p: ValueGetterParams<StudyRow>) => (p.data ? sharedWithText(p.data) : ''),
       flex: 1.5,
       minWidth: 160,
-      tooltipValueGetter: (p) => (p.data ? sharedWithText(p.data) : ''),
+      tooltip: (p) => (p.data ? sharedWithText(p.data) : ''),
     },
   ];
 }

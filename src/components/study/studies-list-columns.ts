@@ -10,7 +10,7 @@ export function listColumns(cols: ColDef<StudyRow>[]): ColDef<StudyRow>[] {
   return cols.map((c) => {
     const out: ColDef<StudyRow> = {
       ...c,
-      tooltipValueGetter: c.tooltipValueGetter ?? ((p) => (p.valueFormatted ?? (p.value == null ? '' : String(p.value))) || null),
+      tooltip: c.tooltip ?? ((p) => (p.valueFormatted ?? (p.value == null ? '' : String(p.value))) || null),
     };
     if (FIT_TO_CONTENT.includes(c.colId ?? '')) {
       // A flex column takes its share of the width, not its content's; autoSizeColumns needs it fixed.

@@ -67,7 +67,7 @@ export function tradeColumns(opts: TradeColumnOptions): (ColDef<TradeDesign> | C
     valueFormatter: (p: ValueFormatterParams<TradeDesign>) =>
       p.value === 'pass' ? '✓ pass' : p.value === 'fail' ? '✗ fail' : p.value === 'n/a' ? 'no sheet' : '',
     // Hovering a fail names each failed limit with its margin.
-    tooltipValueGetter: (p) => (p.data && p.value === 'fail' ? designFailLines(p.data, opts.sheet).join('\n') : null),
+    tooltip: (p) => (p.data && p.value === 'fail' ? designFailLines(p.data, opts.sheet).join('\n') : null),
     cellClassRules: {
       'row-pass': (p: CellClassParams<TradeDesign>) => p.value === 'pass',
       'row-fail': (p: CellClassParams<TradeDesign>) => p.value === 'fail',
