@@ -35,6 +35,9 @@ describe('a sweep over a device', () => {
     const p50 = await page.locator('.ag-cell[col-id="p50EirpDbm"]').allInnerTexts();
     expect(p50).toHaveLength(2);
     for (const text of p50) expect(text).toMatch(/^-?\d+\.\d$/);
+    // A production build: no AG Grid development panel over the grid, and no module cost note for a device's variants.
+    expect(await page.locator('.ag-overlay-error-panel').count()).toBe(0);
+    expect(await page.locator('[data-test="cost-basis"]').count()).toBe(0);
     await page.mouse.move(0, 0);
     await settle(page);
     await screenshot(page, 'device-sweep-trade-table');
