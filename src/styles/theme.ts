@@ -6,11 +6,11 @@ export const palette = {
   teal: '#1d7a74',
   sea: '#5fb3a9',
   amber: '#f2b441',
-  rust: '#c4553a',
+  rust: '#b3472f',
   paper: '#f6f4ef',
   line: '#dcd8cf',
-  pass: '#2f8f5b',
-  fail: '#c4553a',
+  pass: '#237a4b',
+  fail: '#b3472f',
 };
 
 export const theme: ThemeConfig = {

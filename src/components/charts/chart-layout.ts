@@ -12,7 +12,7 @@ export const CHART_FONT = "'Work Sans', system-ui, sans-serif";
 /** Above this many marks a chart draws on a canvas instead of SVG elements. */
 export const CANVAS_THRESHOLD = 3000;
 /** Qualitative series colours (our palette first). */
-export const SERIES_COLOURS = ['#1d7a74', '#f2b441', '#c4553a', '#5b6fd6', '#123f45', '#8e5bb5', '#5fb3a9', '#7a6a3a'];
+export const SERIES_COLOURS = ['#1d7a74', '#f2b441', '#b3472f', '#5b6fd6', '#123f45', '#8e5bb5', '#5fb3a9', '#7a6a3a'];
 
 /** Bottom and left axes with titles, drawn into `g`, styled by attributes so a saved SVG keeps its look. */
 export function drawAxes(

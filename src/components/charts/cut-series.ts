@@ -5,7 +5,7 @@ export interface CutSeries {
   powerDb: readonly number[];
 }
 
-export const SERIES_COLOURS = ['#1d7a74', '#c4553a', '#f2b441', '#123f45', '#5fb3a9', '#8a5a9e', '#6b7f2a'];
+export const SERIES_COLOURS = ['#1d7a74', '#b3472f', '#f2b441', '#123f45', '#5fb3a9', '#8a5a9e', '#6b7f2a'];
 
 export function seriesColour(i: number): string {
   return SERIES_COLOURS[i % SERIES_COLOURS.length]!;

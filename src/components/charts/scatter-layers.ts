@@ -9,7 +9,7 @@ export interface ScatterMark { x: number; y: number; pass: boolean | null }
 type Scale = d3.ScaleLinear<number, number>;
 type Group = d3.Selection<SVGGElement, unknown, null, undefined>;
 
-const FRONT_COLOUR = '#c4553a';
+const FRONT_COLOUR = '#b3472f';
 const SELECTED_COLOUR = '#f2b441';
 const MARK_COLOUR = '#1d7a74';
 

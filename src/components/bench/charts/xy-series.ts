@@ -6,7 +6,7 @@ export interface XySeries {
   markers?: boolean;
 }
 
-export const BENCH_COLOURS = ['#1d7a74', '#c4553a', '#f2b441', '#123f45', '#5fb3a9', '#8a5a9e'];
+export const BENCH_COLOURS = ['#1d7a74', '#b3472f', '#f2b441', '#123f45', '#5fb3a9', '#8a5a9e'];
 
 /** [min, max] of finite values with a little room, or [0, 1] when there is nothing to show. */
 export function paddedDomain(values: number[], pad = 0.05): [number, number] {
