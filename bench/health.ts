@@ -5,16 +5,11 @@
  * most validation on the event loop) and 64×64 designs (the most work per design). A probe asks for
  * /api/health every 50 ms while each runs and prints p50 / p95 / max latency next to the heavy request's time.
  */
-import { mkdtempSync, rmSync } from 'node:fs';
 import os from 'node:os';
-import path from 'node:path';
-import { loadConfig } from '../server/config.ts';
-import { startCluster } from '../server/db/cluster.ts';
-import { freePort } from '../server/db/free-port.ts';
-import { startServer } from '../server/index.ts';
 import { DEMO_USERS } from '../server/seed/accounts.ts';
 import { patternWork } from '../shared/compute/pattern-work.ts';
 import { signIn } from './load.ts';
+import { startBenchServer } from './bench-server.ts';
 
 const quantile = (xs: number[], q: number) => {
   const s = [...xs].sort((a, b) => a - b);
@@ -22,10 +17,8 @@ const quantile = (xs: number[], q: number) => {
 };
 
 export async function run(): Promise<void> {
-  const dir = mkdtempSync(path.join(os.tmpdir(), 'lobewise-bench-health-'));
-  const cluster = await startCluster({ dataDir: dir, port: await freePort(), database: 'lobewise_bench', durable: false });
-  const config = loadConfig({ NODE_ENV: 'production', DATABASE_URL: cluster.url, PORT: '0', SMTP_FAKE_PORT: '0', LOG_LEVEL: 'warn', SESSION_SECRET: 'bench-secret-0123456789abcdef' });
-  const server = await startServer(config);
+  const server = await startBenchServer('health');
+  const config = server.config;
   try {
     const engineer = DEMO_USERS.find((u) => u.role === 'engineer')!;
     const session = await signIn(server.url, engineer.email, engineer.password);
@@ -63,8 +56,6 @@ export async function run(): Promise<void> {
     process.stdout.write(`work budget ${budget.toExponential(2)} element·samples; ${os.cpus().length} CPUs; load average ${os.loadavg().map((l) => l.toFixed(2)).join(' ')}\n`);
     console.table(rows);
   } finally {
-    await server.close();
-    await cluster.stop();
-    rmSync(dir, { recursive: true, force: true });
+    await server.stop();
   }
 }

@@ -4,34 +4,17 @@
  * throw-away PostgreSQL), in Debian's Chromium. Both of Lighthouse's own settings are run: its default (a
  * mid-range phone on a slow 4G link, simulated) and its desktop preset. Scores are 0–100; the metrics in ms.
  */
-import { cpSync, mkdtempSync, rmSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import os from 'node:os';
-import path from 'node:path';
-import { fileURLToPath } from 'node:url';
 import * as chromeLauncher from 'chrome-launcher'; // Lighthouse's own launcher, installed with it
 import lighthouse, { desktopConfig, type Config } from 'lighthouse';
-import { buildClientIfStale } from '../server/client-build.ts';
-import { loadConfig } from '../server/config.ts';
-import { startCluster } from '../server/db/cluster.ts';
-import { freePort } from '../server/db/free-port.ts';
-import { startServer } from '../server/index.ts';
 import { DEMO_USERS } from '../server/seed/accounts.ts';
 import { signIn } from './load.ts';
+import { startBenchServer } from './bench-server.ts';
 
-const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 
 export async function run(): Promise<void> {
-  await buildClientIfStale(root, path.join(root, 'dist'), (m) => process.stdout.write(`${m}\n`));
-  const dir = mkdtempSync(path.join(os.tmpdir(), 'lobewise-bench-lighthouse-'));
-  // Served from a copy, so another build of dist/ meanwhile (a test run, say) cannot pull files from under it.
-  const clientDir = mkdtempSync(path.join(os.tmpdir(), 'lobewise-bench-client-'));
-  cpSync(path.join(root, 'dist'), clientDir, { recursive: true });
-  const cluster = await startCluster({ dataDir: dir, port: await freePort(), database: 'lobewise_bench', durable: false });
-  const server = await startServer(
-    loadConfig({ NODE_ENV: 'production', DATABASE_URL: cluster.url, PORT: '0', SMTP_FAKE_PORT: '0', LOG_LEVEL: 'warn', SESSION_SECRET: 'bench-secret-0123456789abcdef' }),
-    { clientDir },
-  );
+  const server = await startBenchServer('lighthouse', { client: true });
   const chrome = await chromeLauncher.launch({
     chromePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     chromeFlags: ['--headless=new', '--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
@@ -79,9 +62,6 @@ export async function run(): Promise<void> {
     console.table(rows);
   } finally {
     chrome.kill();
-    await server.close();
-    await cluster.stop();
-    rmSync(dir, { recursive: true, force: true });
-    rmSync(clientDir, { recursive: true, force: true });
+    await server.stop();
   }
 }

@@ -7,16 +7,13 @@
  * per second and p50/p95/p99 latency per scenario (each after a 2 s warm-up that is not counted), then stops. `--profile DIR` writes a CPU profile of the
  * server's thread while the load runs (open it in Chrome DevTools or speedscope).
  */
-import { mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { Session as Inspector } from 'node:inspector/promises';
 import os from 'node:os';
 import path from 'node:path';
 import { Worker } from 'node:worker_threads';
-import { loadConfig } from '../server/config.ts';
-import { startCluster } from '../server/db/cluster.ts';
-import { freePort } from '../server/db/free-port.ts';
-import { startServer } from '../server/index.ts';
 import { DEMO_USERS } from '../server/seed/accounts.ts';
+import { startBenchServer } from './bench-server.ts';
 
 /** Seconds each scenario runs unmeasured before its measured run. */
 const WARMUP_SECONDS = 2;
@@ -110,15 +107,8 @@ function drive(url: string, sessions: Session[], scenario: Scenario, connections
 
 export async function run(argv: string[]): Promise<void> {
   const { connections, seconds, profile } = args(argv);
-  const dir = mkdtempSync(path.join(os.tmpdir(), 'lobewise-bench-load-'));
-  const cluster = await startCluster({ dataDir: dir, port: await freePort(), database: 'lobewise_bench', durable: false });
-  const server = await startServer(
-    loadConfig({
-      NODE_ENV: 'production', DATABASE_URL: cluster.url, PORT: '0', SMTP_FAKE_PORT: '0', LOG_LEVEL: 'warn', SESSION_SECRET: 'bench-secret-0123456789abcdef',
-      // The N clients stand for N people but share one demo account: let each have its one evaluation open.
-      HEAVY_REQUESTS_PER_USER: String(Math.min(64, connections)),
-    }),
-  );
+  // The N clients stand for N people but share one demo account: let each have its one evaluation open.
+  const server = await startBenchServer('load', { env: { HEAVY_REQUESTS_PER_USER: String(Math.min(64, connections)) } });
   try {
     const engineer = DEMO_USERS.find((u) => u.role === 'engineer')!;
     const sessions: Session[] = [];
@@ -175,8 +165,6 @@ export async function run(argv: string[]): Promise<void> {
     process.stdout.write(`load average ${os.loadavg().map((l) => l.toFixed(2)).join(' ')}\n`);
     console.table(rows);
   } finally {
-    await server.close();
-    await cluster.stop();
-    rmSync(dir, { recursive: true, force: true });
+    await server.stop();
   }
 }

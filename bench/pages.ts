@@ -5,19 +5,11 @@
  * (headers plus body as sent, so after brotli or gzip) until the network is quiet. Scripts and styles are
  * reported apart from the rest (fonts, images, API answers).
  */
-import { cpSync, mkdtempSync, rmSync } from 'node:fs';
 import os from 'node:os';
-import path from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { chromium, type Browser, type BrowserContext } from 'playwright-core';
-import { buildClientIfStale } from '../server/client-build.ts';
-import { loadConfig } from '../server/config.ts';
-import { startCluster } from '../server/db/cluster.ts';
-import { freePort } from '../server/db/free-port.ts';
-import { startServer } from '../server/index.ts';
 import { DEMO_USERS } from '../server/seed/accounts.ts';
+import { startBenchServer } from './bench-server.ts';
 
-const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const kB = (n: number) => +(n / 1000).toFixed(1);
 
 interface Visit {
@@ -75,16 +67,7 @@ async function measure(browser: Browser, storageState: Awaited<ReturnType<Browse
 }
 
 export async function run(): Promise<void> {
-  await buildClientIfStale(root, path.join(root, 'dist'), (m) => process.stdout.write(`${m}\n`));
-  const dir = mkdtempSync(path.join(os.tmpdir(), 'lobewise-bench-pages-'));
-  // Served from a copy, so another build of dist/ meanwhile (a test run, say) cannot pull files from under it.
-  const clientDir = mkdtempSync(path.join(os.tmpdir(), 'lobewise-bench-client-'));
-  cpSync(path.join(root, 'dist'), clientDir, { recursive: true });
-  const cluster = await startCluster({ dataDir: dir, port: await freePort(), database: 'lobewise_bench', durable: false });
-  const server = await startServer(
-    loadConfig({ NODE_ENV: 'production', DATABASE_URL: cluster.url, PORT: '0', SMTP_FAKE_PORT: '0', LOG_LEVEL: 'warn', SESSION_SECRET: 'bench-secret-0123456789abcdef' }),
-    { clientDir },
-  );
+  const server = await startBenchServer('pages', { client: true });
   const browser = await chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     headless: true,
@@ -131,9 +114,6 @@ export async function run(): Promise<void> {
     for (const e of consoleErrors) process.stdout.write(`console error on ${e}\n`);
   } finally {
     await browser.close();
-    await server.close();
-    await cluster.stop();
-    rmSync(dir, { recursive: true, force: true });
-    rmSync(clientDir, { recursive: true, force: true });
+    await server.stop();
   }
 }
