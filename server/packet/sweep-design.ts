@@ -9,6 +9,7 @@ import { parseSweepDesignId } from '../../shared/schemas/review.ts';
 import { figuresFromPoints, type FigurePoint } from '../../shared/targets/figures.ts';
 import type { ScanRange, TargetSheet } from '../../shared/targets/sheet.ts';
 import { designLabel } from '../../shared/trade/design-label.ts';
+import { fieldError } from '../auth/errors.ts';
 
 export interface SweepDesignRecord {
   label: string;
@@ -34,17 +35,23 @@ function basisText(kept: { steerAzDeg: number; steerElDeg: number }[], all: numb
   return `the ${kept.length} of the sweep's ${all} steering angles inside the target sheet's scan range (${where})`;
 }
 
-/** The sweep design `id` ("<sweep id>:<design index>") if its sweep belongs to `studyId`; null otherwise. */
+/**
+ * The sweep design `id` ("<sweep id>:<design index>") if its sweep belongs to `studyId`; null otherwise. A device
+ * sweep's row is a variant of a whole device (judged by its coverage), not one module design: 400 on `design`.
+ */
 export async function findSweepDesign(m: EntityManager, studyId: string, id: string, sheet: TargetSheet | null = null): Promise<SweepDesignRecord | null> {
   const ref = parseSweepDesignId(id);
   if (!ref) return null;
   const [row] = (await m.query(
-    `SELECT d.design, s.name AS sweep_name
+    `SELECT d.design, s.name AS sweep_name, s.device IS NOT NULL AS device_variant
        FROM sweep_designs d JOIN sweeps s ON s.id = d.sweep_id
       WHERE d.sweep_id = $1 AND d.design_index = $2 AND s.study_id = $3`,
     [ref.sweepId, ref.designIndex, studyId],
-  )) as { design: Record<string, unknown>; sweep_name: string }[];
+  )) as { design: Record<string, unknown>; sweep_name: string; device_variant: boolean }[];
   if (!row) return null;
+  if (row.device_variant) {
+    throw fieldError('design', 'is a variant of a device sweep: sign off the candidates the device uses instead (a variant is judged by its coverage, not as one module)');
+  }
   const points = (await m.query(
     `SELECT design, metrics FROM sweep_points
       WHERE sweep_id = $1 AND design_index = $2 AND metrics IS NOT NULL ORDER BY angle_index`,

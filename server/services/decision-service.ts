@@ -96,7 +96,6 @@ async function resolveDesign(
     failedLimits: checkOf(metrics, judged.sheet)?.failed ?? [],
   });
   if (typeof design === 'string') {
-    await refuseDeviceVariant(m, design);
     const found = await findSweepDesign(m, studyId, design, judged.sheet);
     if (!found) throw NotFound('sweep design');
     return { label: label ?? found.label, design: found.params, metrics: found.metrics, source: design, ...sheetPart(found.metrics) };
@@ -113,14 +112,6 @@ async function resolveDesign(
     basis: scan.basis,
   };
   return { label: label ?? designLabel(design), design: design as unknown as Record<string, unknown>, metrics, source: null, ...sheetPart(metrics) };
-}
-
-/** A device sweep's row is a variant of a whole device (judged by coverage), not one module design to sign off. */
-async function refuseDeviceVariant(m: EntityManager, id: string): Promise<void> {
-  const ref = parseSweepDesignId(id);
-  if (!ref) return;
-  const [row] = (await m.query(`SELECT device IS NOT NULL AS device FROM sweeps WHERE id = $1`, [ref.sweepId])) as { device: boolean }[];
-  if (row?.device) throw fieldError('design', 'is a variant of a device sweep: sign off the candidates the device uses instead (a variant is judged by its coverage, not as one module)');
 }
 
 /** Signing a design that fails limits needs a written reason; the message names the limits. */
