@@ -7,6 +7,7 @@ const benches: Record<string, () => Promise<{ run: (argv: string[]) => Promise<v
   load: () => import('./load.ts'),
   password: () => import('./password.ts'),
   health: () => import('./health.ts'),
+  'work-cost': () => import('./work-cost.ts'),
   coverage: () => import('./coverage.ts'),
   'device-sweep': () => import('./device-sweep.ts'),
   pages: () => import('./pages.ts'),
